@@ -1,0 +1,178 @@
+/*
+ * lex.c - the lexical layer both file formats share (format-spec/lexical.md).
+ *
+ * A file is a sequence of lines ended by LF or CRLF (the last line may lack
+ * one).  Allowed bytes: TAB, space to '~', LF, and CR only right before LF;
+ * anything else makes the file malformed wherever it stands, comments too.
+ * '#' starts a comment; tokens are separated by spaces and tabs only.
+ */
+#include "internal.h"
+
+#include <string.h>
+
+void lex_init(pw_lexer *lx, const char *buf, size_t len, pw_file file, pw_verdict *v)
+{
+    memset(lx, 0, sizeof *lx);
+    lx->buf = buf;
+    lx->len = len;
+    lx->file = file;
+    lx->v = v;
+}
+
+static int is_blank(char c)
+{
+    return c == ' ' || c == '\t';
+}
+
+static int byte_allowed(unsigned char c)
+{
+    return c == '\t' || (c >= 0x20 && c <= 0x7e);
+}
+
+/* Scans one physical line from lx->next; sets content bounds or reports a byte. */
+static int scan_line(pw_lexer *lx)
+{
+    size_t start = lx->next, i = start, content_end = SIZE_MAX;
+
+    lx->line++;
+    for (; i < lx->len && lx->buf[i] != '\n'; i++) {
+        unsigned char c = (unsigned char)lx->buf[i];
+        int crlf = c == '\r' && i + 1 < lx->len && lx->buf[i + 1] == '\n';
+        if (!crlf && !byte_allowed(c))
+            return pw_fail(lx->v, PW_E_BYTE, lx->file, lx->line,
+                           "byte 0x%02x at column %zu is not allowed (ASCII text only)",
+                           c, i - start + 1);
+        if ((crlf || c == '#') && content_end == SIZE_MAX)
+            content_end = i;
+    }
+    if (content_end == SIZE_MAX)
+        content_end = i;
+    lx->cur = lx->buf + start;
+    lx->end = lx->buf + content_end;
+    lx->next = i < lx->len ? i + 1 : lx->len;
+    return 0;
+}
+
+int lex_next_line(pw_lexer *lx)
+{
+    while (lx->next < lx->len) {
+        if (scan_line(lx) != 0)
+            return -1;
+        while (lx->cur < lx->end && is_blank(*lx->cur))
+            lx->cur++;
+        if (lx->cur < lx->end)
+            return 1;
+    }
+    return 0;
+}
+
+int lex_at_end(pw_lexer *lx)
+{
+    while (lx->cur < lx->end && is_blank(*lx->cur))
+        lx->cur++;
+    return lx->cur == lx->end;
+}
+
+int lex_take(pw_lexer *lx, pw_token *t)
+{
+    if (lex_at_end(lx))
+        return 0;
+    t->text = lx->cur;
+    while (lx->cur < lx->end && !is_blank(*lx->cur))
+        lx->cur++;
+    t->len = (size_t)(lx->cur - t->text);
+    return 1;
+}
+
+int lex_is(const pw_token *t, const char *word)
+{
+    size_t n = strlen(word);
+    return t->len == n && memcmp(t->text, word, n) == 0;
+}
+
+int lex_fail_token(pw_lexer *lx, pw_code code, const char *expected, const pw_token *t)
+{
+    if (t == NULL)
+        return pw_fail(lx->v, code, lx->file, lx->line, "expected %s, found end of line", expected);
+    int shown = t->len > PW_TOKEN_SHOWN ? PW_TOKEN_SHOWN : (int)t->len;
+    return pw_fail(lx->v, code, lx->file, lx->line, "expected %s, found '%.*s'%s", expected,
+                   shown, t->text, t->len > PW_TOKEN_SHOWN ? "..." : "");
+}
+
+int lex_expect(pw_lexer *lx, const char *word)
+{
+    pw_token t;
+    int got = lex_take(lx, &t);
+    if (got && lex_is(&t, word))
+        return 0;
+    char expected[48];
+    snprintf(expected, sizeof expected, "'%s'", word);
+    return lex_fail_token(lx, PW_E_SYNTAX, expected, got ? &t : NULL);
+}
+
+int lex_expect_end(pw_lexer *lx)
+{
+    pw_token t;
+    if (!lex_take(lx, &t))
+        return 0;
+    return lex_fail_token(lx, PW_E_SYNTAX, "end of line", &t);
+}
+
+/* Canonical unsigned decimal: "0" or a nonzero digit followed by digits. */
+static int digits_value(const pw_token *t, uint64_t *out)
+{
+    uint64_t value = 0;
+    if (t->len == 0 || (t->text[0] == '0' && t->len > 1))
+        return -1;
+    for (size_t i = 0; i < t->len; i++) {
+        unsigned d = (unsigned)(t->text[i] - '0');
+        if (d > 9)
+            return -1;
+        if (value > (UINT64_MAX - d) / 10)
+            return -2;
+        value = value * 10 + d;
+    }
+    *out = value;
+    return 0;
+}
+
+static int number_failure(pw_lexer *lx, int why, const char *what, const pw_token *t)
+{
+    char expected[96];
+    if (why == -2) {
+        snprintf(expected, sizeof expected, "%s that fits in 64 bits", what);
+        return lex_fail_token(lx, PW_E_RANGE, expected, t);
+    }
+    snprintf(expected, sizeof expected, "%s (decimal digits, no sign, no leading zero)", what);
+    return lex_fail_token(lx, PW_E_NUMBER, expected, t);
+}
+
+int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
+{
+    pw_token t;
+    if (!lex_take(lx, &t))
+        return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
+    int why = digits_value(&t, out);
+    return why == 0 ? 0 : number_failure(lx, why, what, &t);
+}
+
+/* Signed form, used for coordinates only: an optional '-' before a nonzero number. */
+int lex_int(pw_lexer *lx, const char *what, int64_t *out)
+{
+    pw_token t, digits;
+    uint64_t magnitude = 0;
+    if (!lex_take(lx, &t))
+        return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
+    int negative = t.len > 0 && t.text[0] == '-';
+    digits.text = t.text + negative;
+    digits.len = t.len - (size_t)negative;
+    int why = digits_value(&digits, &magnitude);
+    if (why == 0 && negative && magnitude == 0)
+        why = -1;
+    if (why == 0 && magnitude > (uint64_t)INT64_MAX)
+        why = -2;
+    if (why != 0)
+        return number_failure(lx, why, what, &t);
+    *out = negative ? -(int64_t)magnitude : (int64_t)magnitude;
+    return 0;
+}
