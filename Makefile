@@ -47,7 +47,7 @@ $(BUILD)/tests/%: tests/%.c $(SUPPORT_OBJ) $(filter-out $(CLI_MAIN_OBJ),$(CLI_OB
 # Non-blank, non-comment lines of checker/, the figure the kernel budget is stated in.
 kernel-size:
 	@printf 'checker/ kernel: %s non-blank, non-comment lines\n' \
-	  "$$(sh tests/tools/count-sloc.sh checker)"
+	  "$$(sh scripts/count-sloc.sh checker)"
 
 check test: $(BIN) $(TEST_BINS)
 	@sh tests/run-all.sh $(BUILD)

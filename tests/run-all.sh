@@ -29,5 +29,5 @@ for s in tests/check_*.sh tests/check_*.py; do
     esac
 done
 [ -n "$failures" ] && echo "failed programs:$failures"
-echo "test programs: $passed passed, $failed failed"
+echo "suite: $passed passed, $failed failed"
 [ "$failed" -eq 0 ]

@@ -1,0 +1,89 @@
+#!/bin/sh
+# End-to-end tests of the planewit binary: exit codes, messages, standard
+# input, options and limits, as a user or a script sees them.
+# Usage: tests/check_cli.sh BUILD_DIR
+set -u
+bin=${1:-build}/planewit
+tmp=$(mktemp -d)
+trap 'rm -rf "$tmp"' EXIT
+pass=0
+fail=0
+
+expect() { # name expected-exit expected-output-substring command...
+    name=$1 want=$2 text=$3
+    shift 3
+    "$@" >"$tmp/out" 2>&1
+    got=$?
+    if [ "$got" -ne "$want" ]; then
+        echo "FAIL $name: exit $got, expected $want"; sed 's/^/    /' "$tmp/out"; fail=$((fail + 1))
+    elif ! grep -qF -- "$text" "$tmp/out"; then
+        echo "FAIL $name: output lacks '$text'"; sed 's/^/    /' "$tmp/out"; fail=$((fail + 1))
+    else
+        pass=$((pass + 1))
+    fi
+}
+
+printf 'graph 3 3\n0 1\n1 2\n2 0\n' >"$tmp/tri.graph"
+printf 'certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 1\n' >"$tmp/tri.cert"
+printf 'certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 9\n' >"$tmp/bad.cert"
+printf 'graph 3 2\n0 1\n1 1\n' >"$tmp/loop.graph"
+
+expect version 0 "planewit 0.1.0" "$bin" --version
+expect help 0 "usage: planewit COMMAND" "$bin" --help
+expect check-help 0 "Exit status: 0 accepted, 1 rejected, 2 unusable" "$bin" check --help
+expect no-command 2 "usage: planewit COMMAND" "$bin"
+expect unknown-command 2 "unknown command 'frobnicate'" "$bin" frobnicate
+expect unknown-option 2 "unknown option '--fast'" "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --fast
+expect one-file 2 "needs a graph file and a certificate file" "$bin" check "$tmp/tri.graph"
+expect two-stdin 2 "only one of the two files can be standard input" "$bin" check - -
+expect missing-file 2 "nope.graph: cannot open" "$bin" check "$tmp/nope.graph" "$tmp/tri.cert"
+expect accepted 0 "accepted: planar (rotation system) - 3 vertices, 3 edges, 2 faces, 1 component" \
+    "$bin" check "$tmp/tri.graph" "$tmp/tri.cert"
+expect caution 0 "qualified reviewers still decide" "$bin" check "$tmp/tri.graph" "$tmp/tri.cert"
+expect rejected 1 "bad.cert line 5: vertex 9 is not in the graph (N = 3) [vertex-range]" \
+    "$bin" check "$tmp/tri.graph" "$tmp/bad.cert"
+expect unusable 2 "loop.graph line 3: edge 1 1 joins vertex 1 to itself [self-loop]" \
+    "$bin" check "$tmp/loop.graph" "$tmp/tri.cert"
+expect graph-stdin 0 "accepted: planar" sh -c "\"$bin\" check - \"$tmp/tri.cert\" <\"$tmp/tri.graph\""
+expect cert-stdin 1 "<stdin> line 5" sh -c "\"$bin\" check \"$tmp/tri.graph\" - <\"$tmp/bad.cert\""
+expect json-accepted 0 '"verdict":"accepted","exit_code":0,"claim":"planar","witness":"rotation-system"' \
+    "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --json
+expect json-rejected 1 '"reason":{"code":31,"name":"vertex-range","file":"certificate","line":5' \
+    "$bin" check "$tmp/tri.graph" "$tmp/bad.cert" --json
+expect json-unusable 2 '"verdict":"unusable","exit_code":2' "$bin" check "$tmp/loop.graph" "$tmp/tri.cert" --json
+expect limit-vertices 2 "N = 3 exceeds the limit 2 (raise it with --max-vertices)" \
+    "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --max-vertices 2
+expect limit-bytes 2 "larger than 10 bytes (raise it with --max-bytes)" \
+    "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --max-bytes 10
+expect limit-bad-value 2 "--max-edges needs a number" "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --max-edges x
+
+# The record's digests are those sha256sum computes from the same bytes (common practice: FIPS 180-4 SHA-256).
+gsum=$(sha256sum "$tmp/tri.graph" | cut -d' ' -f1)
+csum=$(sha256sum "$tmp/tri.cert" | cut -d' ' -f1)
+expect json-graph-digest 0 "\"sha256\":\"$gsum\"" "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --json
+expect json-cert-digest 0 "\"sha256\":\"$csum\"" "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --json
+printf 'certificate 1\ngraph-sha256 %s\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 1\n' \
+    "$gsum" >"$tmp/bound.cert"
+expect bound-cert 0 "accepted: planar" "$bin" check "$tmp/tri.graph" "$tmp/bound.cert"
+printf '# same graph, other bytes\ngraph 3 3\n0 1\n1 2\n2 0\n' >"$tmp/tri2.graph"
+expect bound-cert-other-bytes 1 "[graph-hash-mismatch]" "$bin" check "$tmp/tri2.graph" "$tmp/bound.cert"
+
+# A header claiming 2,000,000,000 vertices with nothing behind it stays within 64 MB.
+printf 'graph 2000000000 0\n' >"$tmp/huge.graph"
+printf 'certificate 1\nclaim planar\naround 0 :\n' >"$tmp/huge.cert"
+expect huge-header 1 "[around-count]" sh -c "ulimit -v 65536; \"$bin\" check \"$tmp/huge.graph\" \"$tmp/huge.cert\" --max-vertices 2147483647"
+
+# Same case, two paths: the verdict record is the same from a file and from standard input.
+"$bin" check "$tmp/tri.graph" "$tmp/bad.cert" --json | sed 's/"path":"[^"]*"//g' >"$tmp/a.json"
+"$bin" check "$tmp/tri.graph" - --json <"$tmp/bad.cert" | sed 's/"path":"[^"]*"//g' >"$tmp/b.json"
+if cmp -s "$tmp/a.json" "$tmp/b.json"; then pass=$((pass + 1)); else echo "FAIL file-vs-stdin record"; fail=$((fail + 1)); fi
+
+# A 10^6-vertex path checked with a 256 KiB stack: the kernel does not recurse.
+awk 'BEGIN { n = 1000000; print "graph", n, n - 1; for (i = 0; i < n - 1; i++) print i, i + 1 }' >"$tmp/path.graph"
+awk 'BEGIN { n = 1000000; print "certificate 1\nclaim planar"; print "around 0 : 1";
+             for (i = 1; i < n - 1; i++) print "around", i, ":", i - 1, i + 1; print "around", n - 1, ":", n - 2 }' >"$tmp/path.cert"
+expect deep-path 0 "1000000 vertices, 999999 edges, 1 face, 1 component" \
+    sh -c "ulimit -s 256; \"$bin\" check \"$tmp/path.graph\" \"$tmp/path.cert\""
+
+echo "cli: $pass passed, $fail failed"
+[ "$fail" -eq 0 ]

@@ -1,0 +1,299 @@
+/*
+ * test_checks.c - each check of the kernel on small hand-made cases, with the
+ * exact rule, line and message the verdict must carry.  The vector suite
+ * (test_vectors.c) covers every reason code from committed files; these tests
+ * pin the finer behaviour: check order, messages, counts, memory bounds.
+ */
+#include <setjmp.h>
+#include <stdarg.h>
+#include <stddef.h>
+#include <stdint.h>
+#include <cmocka.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "internal.h"
+
+static pw_status check(const char *graph, const char *cert, pw_verdict *v)
+{
+    pw_limits lim;
+    pw_limits_default(&lim);
+    return pw_check(graph, strlen(graph), cert, strlen(cert), &lim, v);
+}
+
+static const char k4[] = "graph 4 6\n0 1\n0 2\n0 3\n1 2\n1 3\n2 3\n";
+
+static void graph_adjacency_is_grouped_by_vertex(void **state)
+{
+    pw_graph g;
+    pw_verdict v;
+    pw_limits lim;
+    static const char text[] = "graph 9 3\n4 1\n1 2\n2 4\n";
+    (void)state;
+    pw_limits_default(&lim);
+    assert_int_equal(pw_graph_parse(text, sizeof text - 1, &lim, &g, &v), PW_OK);
+    assert_int_equal(g.n, 9);
+    assert_int_equal(g.n_adj, 5); /* ids 5..8 are isolated and take no memory */
+    assert_int_equal(pw_degree(&g, 0), 0);
+    assert_int_equal(pw_degree(&g, 4), 2);
+    assert_int_equal(pw_degree(&g, 8), 0);
+    assert_true(pw_adjacent(&g, 4, 2));
+    assert_true(pw_adjacent(&g, 2, 4));
+    assert_false(pw_adjacent(&g, 0, 1));
+    assert_false(pw_adjacent(&g, 7, 1));
+    for (uint32_t i = g.first[1]; i < g.first[2]; i++)
+        assert_int_equal(g.ends[g.darts[i]], 1);
+    pw_graph_free(&g);
+}
+
+static void huge_vertex_count_allocates_nothing_big(void **state)
+{
+    pw_graph g;
+    pw_verdict v;
+    pw_limits lim;
+    static const char text[] = "graph 2000000000 0\n";
+    (void)state;
+    pw_limits_default(&lim);
+    assert_int_equal(pw_graph_parse(text, sizeof text - 1, &lim, &g, &v), PW_E_LIMIT);
+    assert_string_equal(v.detail,
+                        "N = 2000000000 exceeds the limit 100000000 (raise it with --max-vertices)");
+    pw_graph_free(&g);
+    lim.max_vertices = 2147483647u;
+    assert_int_equal(pw_graph_parse(text, sizeof text - 1, &lim, &g, &v), PW_OK);
+    assert_int_equal(g.n_adj, 0);
+    /* The planar check refuses before sizing anything by N: 0 lines were read. */
+    assert_int_equal(pw_check_parsed(&g, text, sizeof text - 1, "certificate 1\nclaim planar\n", 27, &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_AROUND_COUNT);
+    pw_graph_free(&g);
+}
+
+static void header_count_larger_than_the_file_is_an_edge_count_error(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check("graph 3 200000000\n0 1\n", "", &v), PW_UNUSABLE);
+    assert_int_equal(v.code, PW_E_EDGE_COUNT);
+    assert_string_equal(v.detail, "the file ends after 1 edge lines, the header's M is 200000000");
+}
+
+static void repeated_edge_names_both_lines(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check("graph 4 4\n0 1\n2 3\n# c\n3 2\n1 0\n", "", &v), PW_UNUSABLE);
+    assert_int_equal(v.code, PW_E_REPEATED_EDGE);
+    assert_int_equal(v.line, 5);
+    assert_string_equal(v.detail, "edge 3 2 repeats the edge on line 3");
+}
+
+static void planar_counts_faces_per_component(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    /* A triangle, an edge and two isolated vertices (5 and 6; 6 is above every edge id). */
+    assert_int_equal(check("graph 7 4\n0 1\n1 2\n2 0\n3 4\n",
+                           "certificate 1\nclaim planar\naround 6 :\naround 0 : 1 2\n"
+                           "around 1 : 0 2\naround 2 : 0 1\naround 3 : 4\naround 4 : 3\naround 5 :\n",
+                           &v),
+                     PW_ACCEPTED);
+    /* Euler's formula per component: triangle 3-3+2, edge 2-1+1, isolated 1-0+1. */
+    assert_int_equal(v.faces, 2 + 1 + 1 + 1);
+    assert_int_equal(v.components, 4);
+}
+
+static void mirror_image_is_accepted_without_points(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check(k4, "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 3 2\n"
+                               "around 2 : 0 1 3\naround 3 : 0 2 1\n", &v),
+                     PW_ACCEPTED);
+    assert_int_equal(v.faces, 4); /* Euler's polyhedron formula: tetrahedron */
+    assert_int_equal(check(k4, "certificate 1\nclaim planar\naround 0 : 3 2 1\naround 1 : 2 3 0\n"
+                               "around 2 : 3 1 0\naround 3 : 1 2 0\n", &v),
+                     PW_ACCEPTED);
+}
+
+static void rotation_failures_name_vertex_and_line(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check(k4, "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 2 3\n"
+                               "around 2 : 0 1 3\naround 3 : 0 2 1\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_EULER);
+    assert_string_equal(v.detail, "the component of vertex 0 has V - E + F = 4 - 6 + 2 = 0, not 2");
+    assert_int_equal(check(k4, "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 3 2\n"
+                               "around 2 : 0 1 1\naround 3 : 0 2 1\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_LISTED_TWICE);
+    assert_int_equal(v.line, 5);
+    assert_int_equal(check(k4, "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 3\n"
+                               "around 2 : 0 1 3\naround 3 : 0 2 1\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_NEIGHBOUR_MISSING);
+    assert_string_equal(v.detail, "vertex 1 does not list its neighbour 2");
+}
+
+static void hash_binding_comes_before_everything_else(void **state)
+{
+    pw_verdict v;
+    char cert[256];
+    (void)state;
+    snprintf(cert, sizeof cert, "certificate 1\ngraph-sha256 %064d\nclaim planar\naround 9 :\n", 0);
+    assert_int_equal(check(k4, cert, &v), PW_REJECTED);
+    assert_int_equal(v.code, PW_R_GRAPH_HASH);
+    assert_int_equal(v.line, 2);
+}
+
+static void vertex_range_is_reported_at_the_first_bad_id(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check(k4, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 1\nset 1 : 4\n"
+                               "set 2 : 99999999999999999999\n", &v),
+                     PW_UNUSABLE);
+    assert_int_equal(v.code, PW_E_RANGE);
+    assert_int_equal(check(k4, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 1\nset 1 : 4\n"
+                               "set 2 : 7\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_VERTEX_RANGE);
+    assert_int_equal(v.line, 5);
+}
+
+static const char k33[] = "graph 6 9\n0 3\n0 4\n0 5\n1 3\n1 4\n1 5\n2 3\n2 4\n2 5\n";
+
+static void k33_subdivision_sides_matter(void **state)
+{
+    pw_verdict v;
+    (void)state;
+    assert_int_equal(check(k33, "certificate 1\nclaim nonplanar\nsubdivision k33 0 1 2 / 3 4 5\n"
+                                "path 0 3\npath 0 4\npath 0 5\npath 3 1\npath 1 4\npath 1 5\n"
+                                "path 2 3\npath 2 4\npath 5 2\n", &v),
+                     PW_ACCEPTED);
+    assert_int_equal(v.witness, PW_WITNESS_SUBDIVISION_K33);
+    assert_int_equal(check(k33, "certificate 1\nclaim nonplanar\nsubdivision k33 0 3 2 / 1 4 5\n"
+                                "path 0 3\npath 0 4\npath 0 5\npath 3 1\npath 1 4\npath 1 5\n"
+                                "path 2 3\npath 2 4\npath 5 2\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_PATH_ENDS);
+    assert_int_equal(v.line, 4);
+}
+
+static void subdivision_paths_must_be_internally_disjoint(void **state)
+{
+    pw_verdict v;
+    /* K3,3 with the edge 0-3 subdivided by vertex 6 and 1-4 by vertex 7. */
+    static const char g[] = "graph 8 11\n0 6\n6 3\n0 4\n0 5\n1 3\n1 7\n7 4\n1 5\n2 3\n2 4\n2 5\n";
+    (void)state;
+    assert_int_equal(check(g, "certificate 1\nclaim nonplanar\nsubdivision k33 0 1 2 / 3 4 5\n"
+                              "path 0 6 3\npath 0 4\npath 0 5\npath 1 3\npath 1 7 4\npath 1 5\n"
+                              "path 2 3\npath 2 4\npath 2 5\n", &v),
+                     PW_ACCEPTED);
+    assert_int_equal(check(g, "certificate 1\nclaim nonplanar\nsubdivision k33 0 1 2 / 3 4 5\n"
+                              "path 0 6 3\npath 0 6 3\npath 0 5\npath 1 3\npath 1 7 4\npath 1 5\n"
+                              "path 2 3\npath 2 4\npath 2 5\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_PATH_PAIR_TWICE);
+    assert_int_equal(check(g, "certificate 1\nclaim nonplanar\nsubdivision k33 0 1 2 / 3 4 5\n"
+                              "path 0 6 3\npath 0 6 4\npath 0 5\npath 1 3\npath 1 7 4\npath 1 5\n"
+                              "path 2 3\npath 2 4\npath 2 5\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_PATH_VERTEX_REUSED);
+    assert_int_equal(v.line, 5);
+}
+
+static void minor_sets_are_checked_in_order(void **state)
+{
+    pw_verdict v;
+    /* The Petersen graph: outer 0-4, spokes i-(i+5), inner pentagram (textbook). */
+    static const char petersen[] = "graph 10 15\n0 1\n1 2\n2 3\n3 4\n4 0\n0 5\n1 6\n2 7\n3 8\n"
+                                   "4 9\n5 7\n7 9\n9 6\n6 8\n8 5\n";
+    (void)state;
+    /* Contracting each spoke gives K5 (textbook fact: Petersen has a K5 minor). */
+    assert_int_equal(check(petersen, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 0 5\n"
+                                     "set 1 : 1 6\nset 2 : 2 7\nset 3 : 3 8\nset 4 : 4 9\n", &v),
+                     PW_ACCEPTED);
+    assert_int_equal(check(petersen, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 0 7\n"
+                                     "set 1 : 1 6\nset 2 : 2 5\nset 3 : 3 8\nset 4 : 4 9\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_SET_DISCONNECTED);
+    assert_int_equal(v.line, 4);
+    assert_int_equal(check(petersen, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 0 5\n"
+                                     "set 1 : 1 6\nset 2 : 2 7\nset 3 : 3 8\nset 3 : 4 9\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_SET_INDEX);
+}
+
+static void bounds_use_exact_thresholds(void **state)
+{
+    pw_verdict v;
+    static const char k5[] = "graph 5 10\n0 1\n0 2\n0 3\n0 4\n1 2\n1 3\n1 4\n2 3\n2 4\n3 4\n";
+    static const char k5_minus[] = "graph 5 9\n0 1\n0 2\n0 3\n0 4\n1 2\n1 3\n1 4\n2 3\n2 4\n";
+    (void)state;
+    /* 3N - 6 = 9 for N = 5 (common practice). */
+    assert_int_equal(check(k5, "certificate 1\nclaim nonplanar\nedge-bound\n", &v), PW_ACCEPTED);
+    assert_int_equal(check(k5_minus, "certificate 1\nclaim nonplanar\nedge-bound\n", &v), PW_REJECTED);
+    assert_int_equal(v.code, PW_R_EDGE_BOUND);
+    /* K3,3 has 9 edges and 2N - 4 = 8 (common practice). */
+    assert_int_equal(check(k33, "certificate 1\nclaim nonplanar\nbipartite-edge-bound\n"
+                                "side : 0 0 0 1 1 1\n", &v),
+                     PW_ACCEPTED);
+    assert_int_equal(check(k33, "certificate 1\nclaim nonplanar\nbipartite-edge-bound\n"
+                                "side : 0 0 1 1 1 1\n", &v),
+                     PW_REJECTED);
+    assert_int_equal(v.code, PW_R_SIDE_EDGE);
+    assert_string_equal(v.detail, "edge 2 3 (graph line 8) has both ends on side 1");
+}
+
+static void long_path_needs_no_deep_stack(void **state)
+{
+    enum { N = 1000000 };
+    size_t cap = (size_t)N * 40, glen = 0, clen = 0;
+    char *graph = malloc(cap), *cert = malloc(cap);
+    pw_verdict v;
+    (void)state;
+    assert_non_null(graph);
+    assert_non_null(cert);
+    glen += (size_t)snprintf(graph, cap, "graph %d %d\n", N, N - 1);
+    clen += (size_t)snprintf(cert, cap, "certificate 1\nclaim planar\n");
+    for (int i = 0; i < N; i++) {
+        if (i + 1 < N)
+            glen += (size_t)snprintf(graph + glen, cap - glen, "%d %d\n", i, i + 1);
+        if (i == 0)
+            clen += (size_t)snprintf(cert + clen, cap - clen, "around 0 : 1\n");
+        else if (i + 1 == N)
+            clen += (size_t)snprintf(cert + clen, cap - clen, "around %d : %d\n", i, i - 1);
+        else
+            clen += (size_t)snprintf(cert + clen, cap - clen, "around %d : %d %d\n", i, i + 1, i - 1);
+    }
+    pw_limits lim;
+    pw_limits_default(&lim);
+    assert_int_equal(pw_check(graph, glen, cert, clen, &lim, &v), PW_ACCEPTED);
+    assert_int_equal(v.faces, 1); /* a tree has one face (Euler: V - E + F = 2) */
+    free(graph);
+    free(cert);
+}
+
+int main(void)
+{
+    const struct CMUnitTest tests[] = {
+        cmocka_unit_test(graph_adjacency_is_grouped_by_vertex),
+        cmocka_unit_test(huge_vertex_count_allocates_nothing_big),
+        cmocka_unit_test(header_count_larger_than_the_file_is_an_edge_count_error),
+        cmocka_unit_test(repeated_edge_names_both_lines),
+        cmocka_unit_test(planar_counts_faces_per_component),
+        cmocka_unit_test(mirror_image_is_accepted_without_points),
+        cmocka_unit_test(rotation_failures_name_vertex_and_line),
+        cmocka_unit_test(hash_binding_comes_before_everything_else),
+        cmocka_unit_test(vertex_range_is_reported_at_the_first_bad_id),
+        cmocka_unit_test(k33_subdivision_sides_matter),
+        cmocka_unit_test(subdivision_paths_must_be_internally_disjoint),
+        cmocka_unit_test(minor_sets_are_checked_in_order),
+        cmocka_unit_test(bounds_use_exact_thresholds),
+        cmocka_unit_test(long_path_needs_no_deep_stack),
+    };
+    return cmocka_run_group_tests(tests, NULL, NULL);
+}
