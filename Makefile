@@ -4,7 +4,7 @@ CSTD    := -std=c11 -D_POSIX_C_SOURCE=200809L
 WARN    := -Wall -Wextra -Werror -Wshadow -Wconversion -Wsign-conversion \
            -Wstrict-prototypes -Wmissing-prototypes -Wvla -Wformat=2 -Wundef
 OPT     ?= -O2 -g
-CFLAGS  += $(CSTD) $(WARN) $(OPT)
+CFLAGS  += $(CSTD) $(WARN) $(OPT) -pthread
 CRYPTO_CFLAGS := $(shell pkg-config --cflags libcrypto 2>/dev/null)
 CRYPTO_LIBS   := $(shell pkg-config --libs libcrypto 2>/dev/null || echo -lcrypto)
 CMOCKA_LIBS   := $(shell pkg-config --libs cmocka 2>/dev/null || echo -lcmocka)

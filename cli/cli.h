@@ -24,6 +24,18 @@ typedef struct {
 int cli_read_input(cli_input *in, const char *path, const pw_limits *lim);
 void cli_free_input(cli_input *in);
 
+/* An output written whole or not at all (output.c); path "-" is standard output. */
+typedef struct {
+    const char *path;
+    char *temp; /* the temporary file beside path, NULL for standard output */
+    FILE *file; /* write here between open and commit/abort */
+} cli_output;
+
+/* 0, or -1 after printing why.  Then commit (rename into place) or abort (remove). */
+int cli_output_open(cli_output *o, const char *path);
+int cli_output_commit(cli_output *o);
+void cli_output_abort(cli_output *o);
+
 /* Parses --max-vertices/--max-edges/--max-bytes at argv[*i]: 1 taken, 0 not ours, -1 error. */
 int cli_limit_option(int argc, char **argv, int *i, pw_limits *lim);
 
