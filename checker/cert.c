@@ -33,6 +33,7 @@ void pw_cert_free(pw_cert *c)
 {
     free(c->items);
     free(c->values);
+    free(c->points);
     memset(c, 0, sizeof *c);
 }
 
@@ -106,25 +107,34 @@ static int parse_around(parser *p)
     return read_values(p, 1, 0);
 }
 
-static int read_coordinate(parser *p)
+/* A coordinate beyond 2^30 is noted like a vertex id beyond N, and stored as 0. */
+static int read_coordinate(parser *p, int32_t *out)
 {
     int64_t x;
     if (lex_int(&p->lx, "a coordinate", &x) != 0)
         return -1;
-    if (x > COORD_MAX || x < -COORD_MAX)
-        return pw_fail(p->lx.v, PW_E_RANGE, PW_FILE_CERT, p->lx.line,
-                       "coordinate %lld exceeds 2^30 in absolute value", (long long)x);
+    if ((x > COORD_MAX || x < -COORD_MAX) && p->c->bad_coord_line == 0) {
+        p->c->bad_coord = x;
+        p->c->bad_coord_line = p->lx.line;
+    }
+    *out = x > COORD_MAX || x < -COORD_MAX ? 0 : (int32_t)x;
     return 0;
 }
 
 static int parse_point(parser *p)
 {
-    uint32_t v;
-    if (read_vertex(p, &v) != 0 || lex_expect(&p->lx, ":") != 0 || read_coordinate(p) != 0 ||
-        read_coordinate(p) != 0 || lex_expect_end(&p->lx) != 0)
+    pw_point pt;
+    pw_cert *c = p->c;
+    if (read_vertex(p, &pt.v) != 0 || lex_expect(&p->lx, ":") != 0 ||
+        read_coordinate(p, &pt.x) != 0 || read_coordinate(p, &pt.y) != 0 ||
+        lex_expect_end(&p->lx) != 0)
         return -1;
-    if (p->c->points++ == 0)
-        p->c->first_point_line = p->lx.line;
+    if (c->n_points == UINT32_MAX)
+        return pw_fail(p->lx.v, PW_E_LIMIT, PW_FILE_CERT, p->lx.line, "more than 2^32 - 1 points");
+    if (pw_grow((void **)&c->points, &c->cap_points, c->n_points + 1, sizeof *c->points) != 0)
+        return no_memory(p);
+    pt.line = p->lx.line;
+    c->points[c->n_points++] = pt;
     return 0;
 }
 

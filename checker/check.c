@@ -1,9 +1,9 @@
 /*
  * check.c - pw_check(): digests, parsing, and the dispatch to one check.
  *
- * Order of rules, first failure wins: graph file, certificate grammar, point
- * lines (not verifiable yet), graph-sha256 binding, vertex ids in range, then
- * the witness's own rules.
+ * Order of rules, first failure wins: graph file, certificate grammar,
+ * graph-sha256 binding, vertex ids in range, coordinates in range, the
+ * witness's own rules, then (planar with point lines) the drawing.
  */
 #include "internal.h"
 
@@ -51,16 +51,18 @@ static int check_certificate(const pw_graph *g, const char *graph, size_t graph_
         return -1;
     v->claim = c->claim;
     v->witness = c->witness;
-    if (c->points > 0)
-        return pw_fail(v, PW_E_POINTS, PW_FILE_CERT, c->first_point_line,
-                       "point lines are present, and this version cannot verify coordinates");
     if (c->have_hash && memcmp(c->hash, v->graph_sha256, 32) != 0)
         return pw_fail(v, PW_R_GRAPH_HASH, PW_FILE_CERT, c->hash_line,
                        "graph-sha256 differs from the SHA-256 of the graph file");
     if (c->bad_id_line != 0)
         return pw_fail(v, PW_R_VERTEX_RANGE, PW_FILE_CERT, c->bad_id_line,
                        "vertex %llu is not in the graph (N = %u)", (unsigned long long)c->bad_id, g->n);
-    return dispatch(g, graph, graph_len, c, v);
+    if (c->bad_coord_line != 0)
+        return pw_fail(v, PW_R_COORDINATE_RANGE, PW_FILE_CERT, c->bad_coord_line,
+                       "coordinate %lld exceeds 2^30 in absolute value", (long long)c->bad_coord);
+    if (dispatch(g, graph, graph_len, c, v) != 0)
+        return -1;
+    return c->n_points > 0 ? pw_check_drawing(g, c, v) : 0;
 }
 
 pw_status pw_check_parsed(const pw_graph *g, const char *graph, size_t graph_len,

@@ -70,6 +70,13 @@ typedef struct {
     uint64_t line;
 } pw_item;
 
+/* One point line. */
+typedef struct {
+    uint32_t v;
+    int32_t x, y;
+    uint64_t line;
+} pw_point;
+
 typedef struct {
     pw_claim claim;
     pw_witness witness;
@@ -81,10 +88,13 @@ typedef struct {
     uint32_t n_items, cap_items;
     uint32_t *values;        /* vertex ids (side: 0/1, clipped to 2) */
     uint32_t n_values, cap_values;
-    uint64_t points;         /* number of point lines */
-    uint64_t first_point_line;
-    /* The first vertex id >= N, reported by the checks in file order. */
+    pw_point *points;
+    uint32_t n_points, cap_points;
+    /* The first vertex id >= N and the first coordinate beyond 2^30, in file
+       order; the checks report them as rejections. */
     uint64_t bad_id, bad_id_line;
+    int64_t bad_coord;
+    uint64_t bad_coord_line;
 } pw_cert;
 
 int pw_cert_parse(const char *buf, size_t len, uint32_t n, pw_cert *c, pw_verdict *v);
@@ -92,7 +102,10 @@ void pw_cert_free(pw_cert *c);
 
 /* ---- the checks: 0 accepted, -1 with the verdict filled ----------------- */
 
+/* On success the around lists in c->values hold darts instead of vertices. */
 int pw_check_rotation(const pw_graph *g, pw_cert *c, pw_verdict *v);
+/* After pw_check_rotation: the drawing given by the point lines. */
+int pw_check_drawing(const pw_graph *g, const pw_cert *c, pw_verdict *v);
 int pw_check_subdivision(const pw_graph *g, const pw_cert *c, pw_verdict *v);
 int pw_check_minor(const pw_graph *g, const pw_cert *c, pw_verdict *v);
 int pw_check_edge_bound(const pw_graph *g, const pw_cert *c, pw_verdict *v);

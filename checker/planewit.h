@@ -26,9 +26,10 @@
  *     lines, a system and its mirror are both accepted (they are equally valid).
  *   - The graph must be simple; multigraphs and self-loops are refused as input
  *     errors, never silently merged.
- *   - Point lines (straight-line coordinates) are parsed but not yet verified:
- *     a certificate that carries them is refused as unusable (PW_E_POINTS),
- *     because the kernel never accepts a part it did not check.
+ *   - With point lines, the drawing is checked exactly (integer arithmetic, no
+ *     floating point): it is a plane straight-line drawing whose angular
+ *     orders are the around lists.  Coordinates are bounded by 2^30 so that
+ *     every orientation product fits in 64 bits.
  */
 #ifndef PLANEWIT_H
 #define PLANEWIT_H
@@ -37,7 +38,7 @@
 #include <stdint.h>
 #include <stdio.h>
 
-#define PW_VERSION "0.1.0"
+#define PW_VERSION "0.2.0"
 #define PW_NONE UINT32_MAX
 
 /* Outcome of a check; also the process exit status of `planewit check`. */
@@ -66,7 +67,7 @@ typedef enum {
     PW_E_SELF_LOOP = 8,   /* graph edge U U */
     PW_E_REPEATED_EDGE = 9, /* the same unordered pair twice */
     PW_E_EDGE_COUNT = 10, /* edge lines differ from the header's M */
-    PW_E_POINTS = 11,     /* point lines present: not verifiable yet */
+    PW_E_POINTS = 11,     /* retired in 0.2 (point lines are verified now); never produced */
     /* rejections (exit 1) */
     PW_R_GRAPH_HASH = 30,      /* graph-sha256 differs from the graph bytes */
     PW_R_VERTEX_RANGE = 31,    /* a certificate vertex id >= N */
@@ -91,7 +92,16 @@ typedef enum {
     PW_R_SIDE_COUNT = 50,      /* side line does not have N entries */
     PW_R_SIDE_VALUE = 51,      /* a side entry other than 0 or 1 */
     PW_R_SIDE_EDGE = 52,       /* an edge joins two vertices of one side */
-    PW_R_BIPARTITE_BOUND = 53  /* not N >= 3 and M > 2N - 4 */
+    PW_R_BIPARTITE_BOUND = 53, /* not N >= 3 and M > 2N - 4 */
+    /* the straight-line drawing given by point lines (geometry.c, sweep.c) */
+    PW_R_POINT_COUNT = 54,     /* point lines present, but not one per vertex */
+    PW_R_POINT_REPEATED = 55,  /* one vertex has two point lines */
+    PW_R_COORDINATE_RANGE = 56, /* |X| or |Y| above 2^30 */
+    PW_R_POINTS_COINCIDE = 57, /* two vertices at the same point */
+    PW_R_VERTEX_ON_EDGE = 58,  /* a vertex inside an edge's segment */
+    PW_R_EDGES_CROSS = 59,     /* two segments cross at an interior point */
+    PW_R_EDGES_OVERLAP = 60,   /* two collinear segments share more than a point */
+    PW_R_ORDER_MISMATCH = 61   /* angular order of neighbours differs from the around list */
 } pw_code;
 
 typedef enum { PW_FILE_NONE = 0, PW_FILE_GRAPH = 1, PW_FILE_CERT = 2 } pw_file;

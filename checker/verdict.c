@@ -25,7 +25,7 @@ static const reason reasons[] = {
     {PW_E_SELF_LOOP, "self-loop", "an edge joins a vertex to itself"},
     {PW_E_REPEATED_EDGE, "repeated-edge", "the same pair of vertices is joined twice"},
     {PW_E_EDGE_COUNT, "edge-count", "the number of edge lines differs from the header"},
-    {PW_E_POINTS, "points-unverifiable", "coordinates cannot be verified by this version"},
+    {PW_E_POINTS, "points-unverifiable", "retired: coordinates are verified since 0.2"},
     {PW_R_GRAPH_HASH, "graph-hash-mismatch", "the certificate was made for other graph bytes"},
     {PW_R_VERTEX_RANGE, "vertex-range", "the certificate names a vertex the graph lacks"},
     {PW_R_AROUND_COUNT, "around-count", "there is not one around line per vertex"},
@@ -50,6 +50,14 @@ static const reason reasons[] = {
     {PW_R_SIDE_VALUE, "side-value", "a side is neither 0 nor 1"},
     {PW_R_SIDE_EDGE, "side-edge", "an edge joins two vertices on the same side"},
     {PW_R_BIPARTITE_BOUND, "bipartite-edge-bound", "the edge count does not exceed 2N - 4 (or N < 3)"},
+    {PW_R_POINT_COUNT, "point-count", "point lines are given, but not one per vertex"},
+    {PW_R_POINT_REPEATED, "point-repeated", "a vertex has two point lines"},
+    {PW_R_COORDINATE_RANGE, "coordinate-range", "a coordinate exceeds 2^30 in absolute value"},
+    {PW_R_POINTS_COINCIDE, "points-coincide", "two vertices are drawn at the same point"},
+    {PW_R_VERTEX_ON_EDGE, "vertex-on-edge", "a vertex lies inside the segment of an edge"},
+    {PW_R_EDGES_CROSS, "edges-cross", "two edges cross"},
+    {PW_R_EDGES_OVERLAP, "edges-overlap", "two collinear edges overlap"},
+    {PW_R_ORDER_MISMATCH, "order-mismatch", "the drawing's order of neighbours differs from the around list"},
 };
 
 static const reason *find(pw_code code)
