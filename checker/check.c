@@ -72,6 +72,7 @@ pw_status pw_check_parsed(const pw_graph *g, const char *graph, size_t graph_len
     pw_verdict_init(v);
     v->vertices = g->n;
     v->edges = g->m;
+    v->have_counts = 1;
     if (digests(graph, graph_len, cert, cert_len, v) != 0)
         return v->status;
     check_certificate(g, graph, graph_len, cert, cert_len, &c, v);

@@ -10,6 +10,7 @@
  */
 #include "internal.h"
 
+#include <assert.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -85,9 +86,11 @@ static int read_edges(pw_lexer *lx, pw_graph *g, uint32_t room)
     int got;
     while ((got = lex_next_line(lx)) == 1) {
         uint32_t u, w;
-        if (count == g->m || count == room)
+        if (count == g->m)
             return pw_fail(lx->v, PW_E_EDGE_COUNT, PW_FILE_GRAPH, lx->line,
                            "more edge lines than the header's M = %u", g->m);
+        /* Each edge line takes 3 bytes or more after a header of 9 or more. */
+        assert(count < room);
         if (read_endpoint(lx, g->n, &u) != 0 || read_endpoint(lx, g->n, &w) != 0 ||
             lex_expect_end(lx) != 0)
             return -1;
@@ -104,7 +107,8 @@ static int read_edges(pw_lexer *lx, pw_graph *g, uint32_t room)
         return -1;
     if (count != g->m)
         return pw_fail(lx->v, PW_E_EDGE_COUNT, PW_FILE_GRAPH, lx->line,
-                       "the file ends after %u edge lines, the header's M is %u", count, g->m);
+                       "the file ends after %u edge line%s, the header's M is %u", count,
+                       count == 1 ? "" : "s", g->m);
     return 0;
 }
 

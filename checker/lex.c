@@ -136,14 +136,15 @@ static int digits_value(const pw_token *t, uint64_t *out)
     return 0;
 }
 
-static int number_failure(pw_lexer *lx, int why, const char *what, const pw_token *t)
+static int number_failure(pw_lexer *lx, int why, const char *what, const char *form,
+                          const pw_token *t)
 {
     char expected[96];
     if (why == -2) {
         snprintf(expected, sizeof expected, "%s that fits in 64 bits", what);
         return lex_fail_token(lx, PW_E_RANGE, expected, t);
     }
-    snprintf(expected, sizeof expected, "%s (decimal digits, no sign, no leading zero)", what);
+    snprintf(expected, sizeof expected, "%s (%s)", what, form);
     return lex_fail_token(lx, PW_E_NUMBER, expected, t);
 }
 
@@ -153,7 +154,7 @@ int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
     if (!lex_take(lx, &t))
         return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
     int why = digits_value(&t, out);
-    return why == 0 ? 0 : number_failure(lx, why, what, &t);
+    return why == 0 ? 0 : number_failure(lx, why, what, "decimal digits, no sign, no leading zero", &t);
 }
 
 /* Signed form, used for coordinates only: an optional '-' before a nonzero number. */
@@ -172,7 +173,7 @@ int lex_int(pw_lexer *lx, const char *what, int64_t *out)
     if (why == 0 && magnitude > (uint64_t)INT64_MAX)
         why = -2;
     if (why != 0)
-        return number_failure(lx, why, what, &t);
+        return number_failure(lx, why, what, "decimal digits, '-' allowed, no leading zero, no -0", &t);
     *out = negative ? -(int64_t)magnitude : (int64_t)magnitude;
     return 0;
 }

@@ -7,6 +7,18 @@
 #include <stdlib.h>
 #include <string.h>
 
+#ifdef PW_FAULT_INJECTION
+/* Test builds only (tests/fault/): every allocation is counted, and the one
+   whose 1-based number is pw_fault_fail_at fails; 0 fails none. */
+unsigned long pw_fault_fail_at, pw_fault_count;
+static int fault_now(void)
+{
+    return ++pw_fault_count == pw_fault_fail_at;
+}
+#else
+#define fault_now() 0
+#endif
+
 void pw_limits_default(pw_limits *lim)
 {
     lim->max_bytes = (uint64_t)4 << 30;
@@ -19,7 +31,7 @@ void *pw_alloc(size_t n, size_t sz)
     if (sz != 0 && n > SIZE_MAX / sz)
         return NULL;
     size_t bytes = n * sz;
-    return malloc(bytes ? bytes : 1);
+    return fault_now() ? NULL : malloc(bytes ? bytes : 1);
 }
 
 void *pw_zalloc(size_t n, size_t sz)
@@ -41,7 +53,7 @@ int pw_grow(void **p, uint32_t *cap, uint32_t need, size_t sz)
         want = UINT32_MAX;
     if (want > SIZE_MAX / sz)
         return -1;
-    void *q = realloc(*p, (size_t)want * sz);
+    void *q = fault_now() ? NULL : realloc(*p, (size_t)want * sz);
     if (q == NULL)
         return -1;
     *p = q;
@@ -52,14 +64,14 @@ int pw_grow(void **p, uint32_t *cap, uint32_t need, size_t sz)
 pw_code pw_read_all(FILE *stream, uint64_t max_bytes, char **buf, size_t *len)
 {
     size_t cap = 1 << 16, used = 0;
-    char *data = malloc(cap);
+    char *data = fault_now() ? NULL : malloc(cap);
     *buf = NULL;
     *len = 0;
     if (data == NULL)
         return PW_E_NOMEM;
     for (;;) {
         if (used == cap) {
-            char *bigger = cap <= SIZE_MAX / 2 ? realloc(data, cap * 2) : NULL;
+            char *bigger = cap <= SIZE_MAX / 2 && !fault_now() ? realloc(data, cap * 2) : NULL;
             if (bigger == NULL) {
                 free(data);
                 return PW_E_NOMEM;

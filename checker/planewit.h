@@ -134,6 +134,7 @@ typedef struct {
     pw_claim claim;
     pw_witness witness;
     uint64_t vertices, edges, faces, components; /* faces: planar only */
+    int have_counts;     /* vertices and edges are known: the graph was parsed */
     unsigned char graph_sha256[32], cert_sha256[32];
     int have_graph_sha256, have_cert_sha256;
 } pw_verdict;

@@ -51,8 +51,8 @@ static int check_ends(subdivision *s, const pw_item *it)
     int i = branch_index(s, a), j = branch_index(s, b);
     if (i < 0 || j < 0 || i == j || (s->k33 && (i < 3) == (j < 3)))
         return pw_fail(s->v, PW_R_PATH_ENDS, PW_FILE_CERT, it->line,
-                       "a path from %u to %u does not join two branch vertices %s", a, b,
-                       s->k33 ? "on opposite sides" : "");
+                       "a path from %u to %u does not join two branch vertices%s", a, b,
+                       s->k33 ? " on opposite sides" : "");
     if (s->done[i][j])
         return pw_fail(s->v, PW_R_PATH_PAIR_TWICE, PW_FILE_CERT, it->line,
                        "branch vertices %u and %u are already joined by another path", a, b);

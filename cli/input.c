@@ -5,7 +5,7 @@
 #include <stdlib.h>
 #include <string.h>
 
-int cli_read_input(cli_input *in, const char *path, const pw_limits *lim)
+pw_code cli_read_input(cli_input *in, const char *path, const pw_limits *lim)
 {
     int from_stdin = strcmp(path, "-") == 0;
     FILE *f = from_stdin ? stdin : fopen(path, "rb");
@@ -14,19 +14,19 @@ int cli_read_input(cli_input *in, const char *path, const pw_limits *lim)
     in->len = 0;
     if (f == NULL) {
         fprintf(stderr, "planewit: %s: cannot open: %s\n", path, strerror(errno));
-        return -1;
+        return PW_E_READ;
     }
     pw_code code = pw_read_all(f, lim->max_bytes, &in->bytes, &in->len);
     if (!from_stdin)
         fclose(f);
     if (code == PW_OK)
-        return 0;
+        return PW_OK;
     if (code == PW_E_LIMIT)
         fprintf(stderr, "planewit: %s: larger than %llu bytes (raise it with --max-bytes)\n",
                 path, (unsigned long long)lim->max_bytes);
     else
         fprintf(stderr, "planewit: %s: %s\n", path, pw_code_sentence(code));
-    return -1;
+    return code;
 }
 
 void cli_free_input(cli_input *in)

@@ -1,16 +1,35 @@
 /* json.c - the two JSON primitives records need: strings and hex digests. */
 #include "cli.h"
 
+/* Length of the well-formed UTF-8 sequence at p (1 to 4), or 0. */
+static size_t utf8_length(const unsigned char *p)
+{
+    size_t n = p[0] >= 0xf0 && p[0] <= 0xf4 ? 4 : p[0] >= 0xe0 ? 3 : p[0] >= 0xc2 ? 2 : 0;
+    for (size_t i = 1; i < n; i++)
+        if ((p[i] & 0xc0) != 0x80)
+            return 0;
+    return n;
+}
+
+/*
+ * Paths are bytes.  Well-formed UTF-8 passes through as it is; any other byte
+ * at or above 0x80 is written as \u00XX, so the record stays valid JSON.
+ */
 void json_string(FILE *out, const char *s)
 {
     fputc('"', out);
     for (const unsigned char *p = (const unsigned char *)s; *p; p++) {
-        if (*p == '"' || *p == '\\')
+        size_t n = *p >= 0x80 ? utf8_length(p) : 0;
+        if (n > 0) {
+            fwrite(p, 1, n, out);
+            p += n - 1;
+        } else if (*p == '"' || *p == '\\') {
             fprintf(out, "\\%c", *p);
-        else if (*p < 0x20 || *p >= 0x7f)
+        } else if (*p < 0x20 || *p >= 0x7f) {
             fprintf(out, "\\u%04x", *p);
-        else
+        } else {
             fputc(*p, out);
+        }
     }
     fputc('"', out);
 }

@@ -108,9 +108,9 @@ void cli_print_record(FILE *out, const pw_verdict *v, const char *graph_path,
     fputs(",\"detail\":", out);
     json_string(out, v->detail);
     fputs("},\"counts\":{", out);
-    print_count(out, "vertices", v->vertices, 1);
+    print_count(out, "vertices", v->vertices, v->have_counts);
     fputc(',', out);
-    print_count(out, "edges", v->edges, 1);
+    print_count(out, "edges", v->edges, v->have_counts);
     fputc(',', out);
     print_count(out, "faces", v->faces, planar_done);
     fputc(',', out);

@@ -75,7 +75,7 @@ static void header_count_larger_than_the_file_is_an_edge_count_error(void **stat
     (void)state;
     assert_int_equal(check("graph 3 200000000\n0 1\n", "", &v), PW_UNUSABLE);
     assert_int_equal(v.code, PW_E_EDGE_COUNT);
-    assert_string_equal(v.detail, "the file ends after 1 edge lines, the header's M is 200000000");
+    assert_string_equal(v.detail, "the file ends after 1 edge line, the header's M is 200000000");
 }
 
 static void repeated_edge_names_both_lines(void **state)
