@@ -20,8 +20,9 @@ typedef struct {
     size_t len;
 } cli_input;
 
-/* 0, or -1 after printing "planewit: PATH: reason" to stderr. */
-int cli_read_input(cli_input *in, const char *path, const pw_limits *lim);
+/* PW_OK, or after printing "planewit: PATH: reason" to stderr, PW_E_READ,
+   PW_E_LIMIT (larger than lim->max_bytes) or PW_E_NOMEM. */
+pw_code cli_read_input(cli_input *in, const char *path, const pw_limits *lim);
 void cli_free_input(cli_input *in);
 
 /* An output written whole or not at all (output.c); path "-" is standard output. */
