@@ -28,7 +28,7 @@ printf 'certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 
 printf 'certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 9\n' >"$tmp/bad.cert"
 printf 'graph 3 2\n0 1\n1 1\n' >"$tmp/loop.graph"
 
-expect version 0 "planewit 0.1.0" "$bin" --version
+expect version 0 "planewit 0.2.0" "$bin" --version
 expect help 0 "usage: planewit COMMAND" "$bin" --help
 expect check-help 0 "Exit status: 0 accepted, 1 rejected, 2 unusable" "$bin" check --help
 expect no-command 2 "usage: planewit COMMAND" "$bin"
