@@ -65,12 +65,15 @@ typedef struct {
     uint32_t v;
 } placed;
 
+/* Ties (coincident points) fall back to the vertex id, so reports do not depend on qsort. */
 static int by_point(const void *a, const void *b)
 {
     const placed *p = a, *q = b;
     if (p->x != q->x)
         return p->x < q->x ? -1 : 1;
-    return (p->y > q->y) - (p->y < q->y);
+    if (p->y != q->y)
+        return p->y < q->y ? -1 : 1;
+    return (p->v > q->v) - (p->v < q->v);
 }
 
 static int distinct_points(drawing *d)
@@ -135,7 +138,8 @@ static int run(drawing *d)
     /* One point line per vertex: checked first, so that arrays of n are bounded by lines read. */
     if (d->c->n_points != n)
         return pw_fail(d->v, PW_R_POINT_COUNT, PW_FILE_CERT, d->c->points[0].line,
-                       "%u point lines for %u vertices: give all or none", d->c->n_points, n);
+                       "%u point line%s for %u vertices: give all or none", d->c->n_points,
+                       d->c->n_points == 1 ? "" : "s", n);
     d->at = pw_alloc(n, sizeof *d->at);
     d->point_line = pw_zalloc(n, sizeof *d->point_line);
     d->order = pw_alloc(n, sizeof *d->order);

@@ -25,7 +25,8 @@ int pw_xy_less(pw_xy a, pw_xy b);
  * The sweep (sweep.c): no two edges meet except at a common endpoint and no
  * vertex lies inside an edge.  at[v] is v's point, order[] the vertices in
  * lexicographic order of their distinct points, rank[v] v's place in it.
- * point_line[v] is the certificate line of v's point (for messages).
+ * point_line[v] is the certificate line of v's point (for messages).  The
+ * verdict must already hold both files' SHA-256: they key the treap.
  */
 int pw_sweep(const pw_graph *g, const pw_xy *at, const uint32_t *order, const uint32_t *rank,
              const uint64_t *point_line, pw_verdict *v);

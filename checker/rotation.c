@@ -41,7 +41,8 @@ static int index_lines(rotation *r)
     const pw_cert *c = r->c;
     if (c->n_items != r->g->n)
         return pw_fail(r->v, PW_R_AROUND_COUNT, PW_FILE_CERT, 0,
-                       "%u around lines for %u vertices", c->n_items, r->g->n);
+                       "%u around line%s for %u vertices", c->n_items,
+                       c->n_items == 1 ? "" : "s", r->g->n);
     r->line_item = pw_alloc(r->g->n, sizeof *r->line_item);
     if (r->line_item == NULL)
         return nomem(r->v);

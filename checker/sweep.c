@@ -14,9 +14,11 @@
  * leftmost one is found no later than the sweep reaches it: its two edges (or
  * its vertex and edge) are adjacent in the status just before that point.
  *
- * The status is a treap (a search tree kept balanced by random priorities,
- * here a fixed hash of the edge id, so runs are reproducible) walked with
- * parent links: no recursion anywhere.
+ * The status is a treap (a search tree kept balanced by random priorities)
+ * walked with parent links: no recursion anywhere.  The priorities are a hash
+ * of the edge id keyed by the SHA-256 of both input files: runs stay
+ * reproducible, yet no input can choose priorities that degrade the tree
+ * (a fixed hash would let a file order its edges into a path, M^2 time).
  */
 #include "geometry.h"
 
@@ -30,11 +32,16 @@ typedef struct {
     pw_verdict *v;
     uint32_t *left, *right, *up; /* m each; PW_NONE for none */
     uint32_t root;
+    uint64_t key;
 } sweep;
 
-static uint32_t priority(uint32_t e)
+/* A 64-bit mix of the keyed edge id (the finaliser of SplitMix64). */
+static uint64_t priority(const sweep *s, uint32_t e)
 {
-    return e * 2654435761u;
+    uint64_t z = s->key + (e + 1) * 0x9e3779b97f4a7c15u;
+    z = (z ^ (z >> 30)) * 0xbf58476d1ce4e5b9u;
+    z = (z ^ (z >> 27)) * 0x94d049bb133111ebu;
+    return z ^ (z >> 31);
 }
 
 static uint32_t low_end(const sweep *s, uint32_t e)
@@ -91,7 +98,7 @@ static void rotate_up(sweep *s, uint32_t x)
 static void status_remove(sweep *s, uint32_t e)
 {
     while (s->left[e] != PW_NONE && s->right[e] != PW_NONE)
-        rotate_up(s, priority(s->left[e]) > priority(s->right[e]) ? s->left[e] : s->right[e]);
+        rotate_up(s, priority(s, s->left[e]) > priority(s, s->right[e]) ? s->left[e] : s->right[e]);
     replace_child(s, s->up[e], e, s->left[e] != PW_NONE ? s->left[e] : s->right[e]);
 }
 
@@ -221,7 +228,7 @@ static int status_insert(sweep *s, uint32_t e)
         s->right[parent] = e;
     else
         s->left[parent] = e;
-    while (s->up[e] != PW_NONE && priority(e) > priority(s->up[e]))
+    while (s->up[e] != PW_NONE && priority(s, e) > priority(s, s->up[e]))
         rotate_up(s, e);
     return 0;
 }
@@ -270,7 +277,9 @@ static int visit(sweep *s, uint32_t x)
 int pw_sweep(const pw_graph *g, const pw_xy *at, const uint32_t *order, const uint32_t *rank,
              const uint64_t *point_line, pw_verdict *v)
 {
-    sweep s = {g, at, rank, point_line, v, NULL, NULL, NULL, PW_NONE};
+    sweep s = {g, at, rank, point_line, v, NULL, NULL, NULL, PW_NONE, 0};
+    for (int i = 0; i < 8; i++)
+        s.key = s.key << 8 | (uint64_t)(v->graph_sha256[i] ^ v->cert_sha256[i]);
     int result = 0;
     s.left = pw_alloc(g->m, sizeof *s.left);
     s.right = pw_alloc(g->m, sizeof *s.right);

@@ -1,11 +1,34 @@
 /* json.c - the two JSON primitives records need: strings and hex digests. */
 #include "cli.h"
 
-/* Length of the well-formed UTF-8 sequence at p (1 to 4), or 0. */
+/*
+ * Length of the well-formed UTF-8 sequence at p (2 to 4 bytes), or 0: no
+ * overlong forms, no surrogates, nothing above U+10FFFF (RFC 3629, table 3-7
+ * of the Unicode standard: the second byte's range depends on the first).
+ */
 static size_t utf8_length(const unsigned char *p)
 {
-    size_t n = p[0] >= 0xf0 && p[0] <= 0xf4 ? 4 : p[0] >= 0xe0 ? 3 : p[0] >= 0xc2 ? 2 : 0;
-    for (size_t i = 1; i < n; i++)
+    unsigned char lo = 0x80, hi = 0xbf;
+    size_t n;
+    if (p[0] >= 0xc2 && p[0] <= 0xdf)
+        n = 2;
+    else if (p[0] >= 0xe0 && p[0] <= 0xef)
+        n = 3;
+    else if (p[0] >= 0xf0 && p[0] <= 0xf4)
+        n = 4;
+    else
+        return 0;
+    if (p[0] == 0xe0)
+        lo = 0xa0;
+    else if (p[0] == 0xed)
+        hi = 0x9f;
+    else if (p[0] == 0xf0)
+        lo = 0x90;
+    else if (p[0] == 0xf4)
+        hi = 0x8f;
+    if (p[1] < lo || p[1] > hi)
+        return 0;
+    for (size_t i = 2; i < n; i++)
         if ((p[i] & 0xc0) != 0x80)
             return 0;
     return n;
