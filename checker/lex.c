@@ -24,25 +24,24 @@ static int is_blank(char c)
     return c == ' ' || c == '\t';
 }
 
-static int byte_allowed(unsigned char c)
-{
-    return c == '\t' || (c >= 0x20 && c <= 0x7e);
-}
-
 /* Scans one physical line from lx->next; sets content bounds or reports a byte. */
 static int scan_line(pw_lexer *lx)
 {
+    const unsigned char *buf = (const unsigned char *)lx->buf;
     size_t start = lx->next, i = start, content_end = SIZE_MAX;
 
     lx->line++;
-    for (; i < lx->len && lx->buf[i] != '\n'; i++) {
-        unsigned char c = (unsigned char)lx->buf[i];
-        int crlf = c == '\r' && i + 1 < lx->len && lx->buf[i + 1] == '\n';
-        if (!crlf && !byte_allowed(c))
+    for (; i < lx->len; i++) {
+        unsigned char c = buf[i];
+        if ((c >= 0x20 && c <= 0x7e && c != '#') || c == '\t')
+            continue; /* the common case first: one test per ordinary byte */
+        if (c == '\n')
+            break;
+        if (c != '#' && !(c == '\r' && i + 1 < lx->len && buf[i + 1] == '\n'))
             return pw_fail(lx->v, PW_E_BYTE, lx->file, lx->line,
-                           "byte 0x%02x at column %zu is not allowed (ASCII text only)",
-                           c, i - start + 1);
-        if ((crlf || c == '#') && content_end == SIZE_MAX)
+                           "byte 0x%02x at column %zu is not allowed (ASCII text only)", c,
+                           i - start + 1);
+        if (content_end == SIZE_MAX)
             content_end = i;
     }
     if (content_end == SIZE_MAX)
@@ -128,7 +127,7 @@ static int digits_value(const pw_token *t, uint64_t *out)
         unsigned d = (unsigned)(t->text[i] - '0');
         if (d > 9)
             return -1;
-        if (value > (UINT64_MAX - d) / 10)
+        if (value > UINT64_MAX / 10 || (value == UINT64_MAX / 10 && d > UINT64_MAX % 10))
             return -2;
         value = value * 10 + d;
     }
