@@ -26,23 +26,36 @@ SUPPORT_OBJ  := $(TEST_SUPPORT:%.c=$(BUILD)/%.o)
 LIBKERNEL := $(BUILD)/libplanewit-check.a
 BIN       := $(BUILD)/planewit
 
-.PHONY: all check test kernel-size clean help demo
+.PHONY: all check test kernel-size clean help demo qualify bench-batch bench-draw
 all: $(BIN) kernel-size
 
 $(BUILD)/%.o: %.c
 	@mkdir -p $(dir $@)
 	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -Ichecker -Iproducer -Icli -c $< -o $@
 
+# What the binary says about itself in sign-off records (cli/buildinfo.c): the
+# compiler, the flags, and the digest of the vector set (vectors/SHA256SUMS)
+# present at build time, which `make qualify` then runs.  Rebuilt when the
+# Makefile or the vector sums change.
+VECTOR_SUMS := $(wildcard vectors/SHA256SUMS)
+VECTOR_SET_SHA256 = $(if $(VECTOR_SUMS),$(firstword $(shell sha256sum $(VECTOR_SUMS))))
+BUILD_CC_VERSION = $(shell $(CC) --version 2>/dev/null | head -n 1 | tr -d "\"'\\\\")
+$(BUILD)/cli/buildinfo.o: cli/buildinfo.c Makefile $(VECTOR_SUMS)
+	@mkdir -p $(dir $@)
+	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -Ichecker -Iproducer -Icli \
+	  -DPW_BUILD_CC='"$(CC): $(BUILD_CC_VERSION)"' -DPW_BUILD_CFLAGS='"$(strip $(CFLAGS))"' \
+	  -DPW_VECTOR_SET_SHA256='"$(VECTOR_SET_SHA256)"' -c $< -o $@
+
 # The trust boundary: the kernel library is built from checker/ alone.
 $(LIBKERNEL): $(KERNEL_OBJ)
 	$(AR) rcs $@ $^
 
 $(BIN): $(CLI_OBJ) $(PRODUCER_OBJ) $(LIBKERNEL)
-	$(CC) $(CFLAGS) -o $@ $(CLI_OBJ) $(PRODUCER_OBJ) $(LIBKERNEL) $(CRYPTO_LIBS)
+	$(CC) $(CFLAGS) -o $@ $(CLI_OBJ) $(PRODUCER_OBJ) $(LIBKERNEL) $(CRYPTO_LIBS) -lm
 
 $(BUILD)/tests/%: tests/%.c $(SUPPORT_OBJ) $(filter-out $(CLI_MAIN_OBJ),$(CLI_OBJ)) $(PRODUCER_OBJ) $(LIBKERNEL)
 	@mkdir -p $(dir $@)
-	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -Ichecker -Iproducer -Icli -Itests -o $@ $^ $(CMOCKA_LIBS) $(CRYPTO_LIBS)
+	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -Ichecker -Iproducer -Icli -Itests -o $@ $^ $(CMOCKA_LIBS) $(CRYPTO_LIBS) -lm
 
 # Non-blank, non-comment lines of checker/, the figure the kernel budget is stated in.
 kernel-size:
@@ -55,6 +68,23 @@ check test: $(BIN) $(TEST_BINS)
 demo: $(BIN)
 	@sh examples/run-demo.sh $(BIN)
 
+# The qualification run: every vector of vectors/MANIFEST through the built binary,
+# every hash of vectors/SHA256SUMS verified; report in $(BUILD)/qualification.json.
+qualify: $(BIN)
+	$(BIN) selftest --vectors vectors -o $(BUILD)/qualification.json
+
+# Batch throughput: 10^5 small jobs, and one 10^7-edge job among them (bench/results-batch.md).
+bench-batch: $(BIN)
+	sh bench/batch_bench.sh $(BIN) bench/results-batch.md
+
+# Drawing at 10^6 edges vs the Boost Graph Library's drawing pipeline (bench/results-draw.md).
+bench-draw: $(BIN) $(LIBKERNEL)
+	sh bench/draw_bench.sh $(BUILD)
+
+# Drawing check vs the Boost Graph Library's is_straight_line_drawing (bench/results-check.md).
+bench-check: $(BIN)
+	sh bench/check_bench.sh $(BUILD)
+
 clean:
 	rm -rf $(BUILD)
 
@@ -62,6 +92,136 @@ help:
 	@echo "make            build $(BIN) and print the kernel's size"
 	@echo "make check      build and run every test (unit, vectors, end-to-end, cross-checks)"
 	@echo "make demo       run the bundled demo"
+	@echo "make qualify    run every vector with the built binary; report in $(BUILD)/qualification.json"
+	@echo "make bench-batch  batch throughput benchmark, results in bench/results-batch.md"
+	@echo "make bench-check  drawing check vs Boost, results in bench/results-check.md"
+	@echo "make bench-draw   drawing at 10^6 edges vs Boost, results in bench/results-draw.md"
 	@echo "make clean      remove $(BUILD)/"
 
 -include $(KERNEL_OBJ:.o=.d)
+
+# ---- Hardening: sanitizers, valgrind, coverage, fuzzing, lint, mutation -----
+# Results and how to read them: bench/results-hardening.md.  `make help-hardening`.
+.PHONY: sanitize sanitize-replay valgrind coverage coverage-enforce fuzz fuzz-afl fault-injection \
+        differential lint mutate help-hardening
+SAN_FLAGS    := -O1 -g -fno-omit-frame-pointer -fsanitize=address,undefined -fno-sanitize-recover=all
+HARD_CFLAGS  := $(CSTD) $(WARN) $(CRYPTO_CFLAGS) -Ichecker -Icli -Itests/fuzz
+HARD_DEPS    := $(wildcard tests/fuzz/*.c tests/fuzz/*.h tests/fault/*.c checker/*.h) $(KERNEL_SRC)
+ORACLE_SRC   := tests/fuzz/differential.c tests/fuzz/oracle.c tests/fuzz/oracle_text.c \
+                tests/fuzz/oracle_rules.c tests/fuzz/oracle_draw.c tests/fuzz/token_mutate.c
+IMPORT_SRC   := $(wildcard cli/import_*.c) cli/edge_list.c cli/graph6.c cli/text_scan.c cli/name_table.c
+# Sources of harness $(1): its own file, the shared part, the kernel, and what it tests.
+fuzz_sources = tests/fuzz/fuzz_$(1).c tests/fuzz/fuzz_common.c $(KERNEL_SRC) \
+               $(if $(filter differential certify,$(1)),$(ORACLE_SRC)) \
+               $(if $(filter import,$(1)),$(IMPORT_SRC)) $(if $(filter certify,$(1)),$(PRODUCER_SRC) -Iproducer -lm)
+
+# The whole suite (make check) with ASan + UBSan, any report fatal, in build-san/;
+# then allocation-failure injection, the seeded differential run, and every seed
+# of every fuzz harness replayed, all under the same sanitizers.
+sanitize:
+	@fail=0; \
+	$(MAKE) BUILD=build-san OPT="$(SAN_FLAGS)" check || fail=1; \
+	$(MAKE) fault-injection || fail=1; \
+	$(MAKE) differential || fail=1; \
+	$(MAKE) sanitize-replay || fail=1; \
+	if [ $$fail -eq 0 ]; then echo "sanitize: suite, fault injection, differential, replays clean"; \
+	else echo "sanitize: FAILED (see above)"; exit 1; fi
+# Every seed and past finding of every harness, replayed once with the sanitizers.
+SAN_REPLAYS := graph cert check import differential certify
+sanitize-replay: $(foreach t,$(SAN_REPLAYS),build-san/fuzz/replay_$(t))
+	/usr/bin/python3 tests/fuzz/seeds.py build-san/fuzz/seeds
+	@fail=0; for t in $(SAN_REPLAYS); do \
+	  build-san/fuzz/replay_$$t build-san/fuzz/seeds/$$t/* $$(ls -d tests/fuzz/regressions/$$t/* 2>/dev/null) \
+	    >/dev/null 2>build-san/fuzz/replay_$$t.log && echo "replay $$t: clean" || \
+	  { echo "replay $$t: FAILED"; grep -m 3 "runtime error\|ERROR:\|property violated" build-san/fuzz/replay_$$t.log; fail=1; }; \
+	done; exit $$fail
+build-san/fuzz/replay_%: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	$(CC) $(HARD_CFLAGS) $(SAN_FLAGS) -o $@ tests/fuzz/standalone.c $(call fuzz_sources,$*) $(CRYPTO_LIBS)
+
+# Every allocation of every vector's check made to fail in turn (tests/fault/):
+# each must give status unusable, reason out-of-memory, and leak nothing (LSan).
+fault-injection: build-fault/alloc_failure
+	build-fault/alloc_failure
+build-fault/alloc_failure: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	$(CC) $(HARD_CFLAGS) $(SAN_FLAGS) $(FUZZ_RECOVER) -DPW_FAULT_INJECTION -o $@ tests/fault/alloc_failure.c \
+	  tests/fuzz/vector_list.c $(KERNEL_SRC) $(CRYPTO_LIBS)
+
+# Kernel against the independent oracle on every vector and DIFF_ROUNDS seeded
+# token mutations of each (PW_SEED=N replays a run).
+DIFF_ROUNDS ?= 200
+differential: build-san/fuzz/differential_run
+	build-san/fuzz/differential_run $(DIFF_ROUNDS)
+build-san/fuzz/differential_run: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	$(CC) $(HARD_CFLAGS) $(SAN_FLAGS) $(FUZZ_RECOVER) -o $@ tests/fuzz/differential_run.c tests/fuzz/vector_list.c \
+	  tests/fuzz/fuzz_common.c $(ORACLE_SRC) $(KERNEL_SRC) $(CRYPTO_LIBS)
+
+# The kernel's cmocka programs under valgrind (any error or leak fails), and the
+# allocation-failure run without ASan under valgrind.
+VALGRIND := valgrind -q --error-exitcode=99 --leak-check=full --show-leak-kinds=all \
+            --errors-for-leak-kinds=all
+KERNEL_TESTS := $(filter $(addprefix $(BUILD)/tests/,test_lex test_checks test_geometry test_vectors),$(TEST_BINS))
+valgrind: $(KERNEL_TESTS) build-fault/alloc_failure_vg
+	@for t in $(KERNEL_TESTS) build-fault/alloc_failure_vg; do echo "== valgrind $$t"; \
+	  $(VALGRIND) $$t >/dev/null || { echo "valgrind: $$t FAILED"; exit 1; }; done
+	@echo "valgrind: $(words $(KERNEL_TESTS)) kernel test programs and the fault run: no error, no leak"
+build-fault/alloc_failure_vg: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	$(CC) $(HARD_CFLAGS) -O1 -g -DPW_FAULT_INJECTION -o $@ tests/fault/alloc_failure.c \
+	  tests/fuzz/vector_list.c $(KERNEL_SRC) $(CRYPTO_LIBS)
+
+# Line and branch coverage of checker/ by the whole suite (gcovr), uncovered lines listed.
+GCOVR := gcovr --root . --filter 'checker/' --object-directory build-cov
+coverage:
+	rm -rf build-cov
+	-$(MAKE) BUILD=build-cov OPT="-O0 -g --coverage" check
+	$(GCOVR) --txt
+	$(GCOVR) --txt --branches | tail -n +1
+	$(GCOVR) --print-summary -o /dev/null
+# The same figures as a gate for CI: 100% of lines, at least 95% of branches.
+coverage-enforce: coverage
+	$(GCOVR) --fail-under-line 100 --fail-under-branch 95 -o /dev/null
+
+# libFuzzer harnesses (tests/fuzz/), FUZZ_SECONDS each; corpora in build-fuzz/corpus/.
+FUZZ_CC      ?= clang
+FUZZ_SECONDS ?= 60
+# Until the kernel's NULL + 0 (rotation.c, geometry.c; results file, finding 1) is
+# fixed, that one UBSan check reports without stopping the fuzzers, the fault run and
+# the differential run; all others stop them.  sanitize-replay keeps it fatal.
+FUZZ_RECOVER ?= -fsanitize-recover=pointer-overflow
+fuzz:
+	sh tests/fuzz/run.sh $(FUZZ_SECONDS)
+build-fuzz/fuzz_%: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	$(FUZZ_CC) $(HARD_CFLAGS) $(SAN_FLAGS) $(FUZZ_RECOVER) -fsanitize=fuzzer -o $@ \
+	  $(call fuzz_sources,$*) $(CRYPTO_LIBS)
+# The same harnesses for AFL++ (Debian afl++), persistent mode (tests/fuzz/standalone.c).
+AFL_CC ?= afl-clang-fast
+fuzz-afl: $(foreach t,graph cert check import differential certify,build-afl/fuzz_$(t))
+build-afl/fuzz_%: $(HARD_DEPS)
+	@mkdir -p $(dir $@)
+	AFL_USE_ASAN=1 AFL_USE_UBSAN=1 $(AFL_CC) $(HARD_CFLAGS) -O1 -g -o $@ tests/fuzz/standalone.c \
+	  $(call fuzz_sources,$*) $(CRYPTO_LIBS)
+
+# cppcheck and clang-tidy on checker/, the chosen checks documented in scripts/lint.sh.
+lint:
+	sh scripts/lint.sh
+
+# Mutation testing of checker/ (scripts/mutate.py; MUTATE_ARGS="--sample 200" for a quick look).
+MUTATE_ARGS ?= --differential
+mutate:
+	/usr/bin/python3 scripts/mutate.py $(MUTATE_ARGS)
+
+help-hardening:
+	@echo "make sanitize          whole suite + fault injection + differential + seed replays, ASan/UBSan"
+	@echo "make valgrind          kernel test programs and the fault run under valgrind"
+	@echo "make coverage          gcovr line/branch coverage of checker/ by the suite"
+	@echo "make coverage-enforce  the same, failing below 100% lines / 95% branches"
+	@echo "make fuzz FUZZ_SECONDS=N  each libFuzzer harness for N seconds"
+	@echo "make fuzz-afl          build the harnesses for AFL++ into build-afl/"
+	@echo "make fault-injection   fail every allocation in turn over the vectors"
+	@echo "make differential      kernel vs the independent oracle on mutated vectors"
+	@echo "make lint              cppcheck + clang-tidy on checker/"
+	@echo "make mutate            mutation testing of checker/"

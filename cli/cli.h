@@ -30,6 +30,7 @@ typedef struct {
     const char *path;
     char *temp; /* the temporary file beside path, NULL for standard output */
     FILE *file; /* write here between open and commit/abort */
+    int direct; /* the target is a device or pipe, opened as it is */
 } cli_output;
 
 /* 0, or -1 after printing why.  Then commit (rename into place) or abort (remove). */
@@ -53,6 +54,82 @@ extern const char cli_caution[];
 void json_string(FILE *out, const char *s);
 void json_hex(FILE *out, const unsigned char *bytes, size_t n);
 
+/* SHA-256 (sha256_file.c): 0, or -1 with errno set by the failed read. */
+int cli_sha256_stream(FILE *f, unsigned char out[32]);
+int cli_sha256_file(const char *path, unsigned char out[32]);
+/* A digest as 64 lowercase hex digits and a NUL, as sha256sum prints it. */
+void cli_sha256_hex(const unsigned char digest[32], char hex[65]);
+
+/* This binary (buildinfo.c); the vector-set digest is NULL when none was embedded. */
+const char *cli_build_compiler(void);
+const char *cli_build_flags(void);
+const char *cli_build_vector_set(void);
+int cli_self_sha256(unsigned char out[32]);
+/* The "tool" JSON object naming this binary, and the UTC time as a JSON string (signoff.c). */
+void cli_print_tool(FILE *out);
+void cli_print_utc_now(FILE *out);
+
+/* The canonical graph digest (canon.c); -1 when the graph is unusable. */
+#define CLI_CANONICAL_FORM "planewit-graph-normal-form-1"
+int cli_canonical_graph_sha256(const char *bytes, size_t len, const pw_limits *lim,
+                               unsigned char out[32]);
+
+/* The verdict record without its line end, malloc'ed (record_string.c); NULL if out of memory. */
+char *cli_record_string(const pw_verdict *v, const char *graph_path, const char *cert_path,
+                        size_t *len);
+
+/* The sign-off record (signoff.c, format-spec/signoff-record.md). */
+typedef struct {
+    const char *graph_path, *cert_path;
+    const char *note;               /* NULL: no note */
+    const unsigned char *canonical; /* NULL: the graph could not be parsed */
+} cli_signoff;
+int cli_write_signoff(const char *path, const pw_verdict *v, const cli_signoff *s);
+
+/* ---- pictures (svg_common.c, svg_plane.c, svg_witness.c) ----------------- */
+/* The document frame; scale is pixels per viewBox unit. */
+void svg_begin(FILE *out, double min_x, double min_y, double w, double h, double scale,
+               const char *title);
+void svg_style(FILE *out, double edge, double dot, double font, double caption);
+void svg_end(FILE *out);
+void svg_text(FILE *out, const char *s); /* XML character data, escaped */
+void svg_caption(FILE *out, double x, double y, const char *cls, const char *line);
+
+/* A planar straight-line drawing, y axis up, coordinates >= 0. */
+typedef struct {
+    uint32_t n;
+    const int64_t *x, *y;
+    int64_t width, height;     /* largest coordinates */
+    double step;               /* the drawing's natural spacing: 1 on a grid */
+    const char *const *labels; /* NULL, or n names (NULL entries: the id) */
+    const char *caption, *caption2; /* caption2 may be NULL */
+} svg_plane;
+void svg_write_plane(FILE *out, const pw_graph *g, const svg_plane *p);
+
+/* A Kuratowski witness: K5 (branch B0..B4, 10 paths) or K3,3 (A0 A1 A2 B0 B1 B2, 9). */
+typedef struct {
+    int k5;
+    const uint32_t *branch;
+    const uint32_t *path;       /* concatenated, each from branch to branch */
+    const uint32_t *path_start; /* paths + 1 offsets */
+    const char *const *labels;  /* NULL, or g->n names */
+} svg_witness;
+/* The two paths that cross in the picture (the conflict the caption names). */
+void svg_witness_conflict(const svg_witness *w, unsigned *p, unsigned *q);
+/* Path k as "a-b-c", or "a-b-...-y-z (k edges)" when long, with names if given. */
+void svg_witness_describe(const svg_witness *w, unsigned k, char *line, size_t size);
+/* 0, or -1 when memory runs out. */
+int svg_write_witness(FILE *out, const pw_graph *g, const svg_witness *w);
+
+int cmd_draw(int argc, char **argv);
+
 int cmd_check(int argc, char **argv);
+int cmd_batch(int argc, char **argv);
+int cmd_merge(int argc, char **argv);
+int cmd_seal(int argc, char **argv);
+int cmd_audit(int argc, char **argv);
+int cmd_selftest(int argc, char **argv);
+int cmd_import(int argc, char **argv);
+int cmd_certify(int argc, char **argv);
 
 #endif

@@ -8,6 +8,14 @@ static const char usage[] =
     "\n"
     "Commands:\n"
     "  check GRAPH CERT   verify a planarity certificate (exit 0 accepted, 1 rejected, 2 unusable)\n"
+    "  batch LIST         check every job of a jobs list on worker threads, in job order\n"
+    "  merge SHARD...     put the outputs of 'batch --shard' back into one run's order\n"
+    "  seal DIR           write DIR/SHA256SUMS and a seal record over every file in DIR\n"
+    "  audit DIR          re-verify a sealed DIR's hashes and re-check its certificates\n"
+    "  selftest           run every test vector and write a qualification report\n"
+    "  certify GRAPH      find a certificate, have the kernel check it, then write it\n"
+    "  import FILE        bring a graph in from graph6, DIMACS or an edge list\n"
+    "  draw GRAPH         straight-line grid drawing and picture; a non-planar graph's witness\n"
     "\n"
     "Options:\n"
     "  -h, --help         show this help; 'planewit COMMAND --help' shows a command's\n"
@@ -23,6 +31,14 @@ typedef struct {
 
 static const command commands[] = {
     {"check", cmd_check},
+    {"batch", cmd_batch},
+    {"merge", cmd_merge},
+    {"seal", cmd_seal},
+    {"audit", cmd_audit},
+    {"selftest", cmd_selftest},
+    {"certify", cmd_certify},
+    {"import", cmd_import},
+    {"draw", cmd_draw},
 };
 
 int main(int argc, char **argv)

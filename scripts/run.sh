@@ -7,7 +7,7 @@ cd "$(dirname "$0")/.."
 need="gcc make libc6-dev pkg-config libssl-dev"
 case "${1:-}" in
     demo) ;;
-    test) need="$need clang libcmocka-dev python3 python3-networkx" ;;
+    test) need="$need clang libcmocka-dev python3 python3-networkx nauty g++ libboost-graph-dev libxml2-utils librsvg2-bin" ;;
     *) echo "usage: sh scripts/run.sh demo|test" >&2; exit 2 ;;
 esac
 missing=""

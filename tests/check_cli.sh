@@ -85,5 +85,18 @@ awk 'BEGIN { n = 1000000; print "certificate 1\nclaim planar"; print "around 0 :
 expect deep-path 0 "1000000 vertices, 999999 edges, 1 face, 1 component" \
     sh -c "ulimit -s 256; \"$bin\" check \"$tmp/path.graph\" \"$tmp/path.cert\""
 
+# Output to a pipe or device is written through it, never replaced by a file (a rename over
+# /dev/null once turned it into a regular file).
+mkfifo "$tmp/pipe"
+cat "$tmp/pipe" >"$tmp/piped" &
+reader=$!
+"$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --record "$tmp/pipe" >/dev/null 2>&1
+wait "$reader"
+if [ -p "$tmp/pipe" ] && grep -q '"verdict":"accepted"' "$tmp/piped"; then
+    pass=$((pass + 1))
+else
+    echo "FAIL record through a pipe: the pipe was replaced or nothing came through"; fail=$((fail + 1))
+fi
+
 echo "cli: $pass passed, $fail failed"
 [ "$fail" -eq 0 ]

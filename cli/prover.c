@@ -1,0 +1,136 @@
+/*
+ * prover.c - one certificate made and self-checked.  The certificate is
+ * rendered into a memory stream that lives as long as the prover, so a
+ * stream of millions of graphs reuses one buffer; the kernel then checks the
+ * rendered bytes exactly as `planewit check` would check a file.
+ */
+#include "prove.h"
+
+#include <stdlib.h>
+#include <string.h>
+
+int prover_open(prover *p, witness_choice choice)
+{
+    memset(p, 0, sizeof *p);
+    p->choice = choice;
+    p->memory = open_memstream(&p->cert, &p->cert_size);
+    return p->memory != NULL ? 0 : -1;
+}
+
+static void drop_result(prover *p)
+{
+    if (p->have_result)
+        pp_result_free(&p->result);
+    p->have_result = 0;
+}
+
+void prover_close(prover *p)
+{
+    drop_result(p);
+    if (p->memory != NULL)
+        fclose(p->memory);
+    free(p->cert);
+    free(p->side);
+    free(p->queue);
+    memset(p, 0, sizeof *p);
+}
+
+static int ensure_colour_room(prover *p, const pw_graph *g)
+{
+    if (p->side != NULL && g->n <= p->side_room)
+        return 0;
+    free(p->side);
+    free(p->queue);
+    p->side = malloc((size_t)g->n + 1);
+    p->queue = malloc(((size_t)g->n + 1) * sizeof *p->queue);
+    p->side_room = g->n;
+    return p->side != NULL && p->queue != NULL ? 0 : -1;
+}
+
+/* The edge-count witnesses, when one holds: 1 found (p->kind set), 0 none, -1 no memory. */
+static int find_bound(prover *p, const pw_graph *g)
+{
+    int64_t n = g->n, m = g->m;
+    if (n < 3 || m <= 2 * n - 4)
+        return 0;
+    if (m > 3 * n - 6) {
+        p->kind = PW_WITNESS_EDGE_BOUND;
+        return 1;
+    }
+    if (ensure_colour_room(p, g) != 0)
+        return -1;
+    if (!two_colour(g, p->side, p->queue))
+        return 0;
+    p->kind = PW_WITNESS_BIPARTITE_BOUND;
+    return 1;
+}
+
+static void write_preamble(FILE *out, const unsigned char *sha)
+{
+    char hex[65];
+    fputs("certificate 1\n", out);
+    if (sha != NULL) {
+        cli_sha256_hex(sha, hex);
+        fprintf(out, "graph-sha256 %s\n", hex);
+    }
+    fputs("claim nonplanar\n", out);
+}
+
+static void write_bound(const prover *p, const pw_graph *g, const unsigned char *sha)
+{
+    write_preamble(p->memory, sha);
+    if (p->kind == PW_WITNESS_EDGE_BOUND) {
+        fputs("edge-bound\n", p->memory);
+        return;
+    }
+    fputs("bipartite-edge-bound\nside :", p->memory);
+    for (uint32_t v = 0; v < g->n; v++)
+        fputs(p->side[v] ? " 1" : " 0", p->memory);
+    fputc('\n', p->memory);
+}
+
+static pw_witness kind_of(const pp_result *r)
+{
+    if (r->kind == PP_PLANAR)
+        return PW_WITNESS_ROTATION;
+    return r->kind == PP_K5 ? PW_WITNESS_SUBDIVISION_K5 : PW_WITNESS_SUBDIVISION_K33;
+}
+
+/* Renders the certificate into p->memory: 0, -1 out of memory, -2 the producer failed. */
+static int render(prover *p, const pw_graph *g, const unsigned char *sha)
+{
+    int bound = p->choice == WITNESS_CHEAPEST ? find_bound(p, g) : 0;
+    if (bound < 0)
+        return -1;
+    if (bound > 0) {
+        write_bound(p, g, sha);
+        return 0;
+    }
+    memset(&p->result, 0, sizeof p->result);
+    int got = pp_certify(g, &p->result);
+    if (got != 0)
+        return got == -1 ? -1 : -2;
+    p->have_result = 1;
+    p->kind = kind_of(&p->result);
+    return pp_write_cert(p->memory, g, &p->result, sha) == 0 ? 0 : -1;
+}
+
+prove_status prover_run(prover *p, const pw_graph *g, const char *graph, size_t graph_len,
+                        const unsigned char *sha, pw_verdict *v)
+{
+    drop_result(p);
+    clearerr(p->memory);
+    if (fseek(p->memory, 0, SEEK_SET) != 0)
+        return PROVE_NO_MEMORY;
+    int rendered = render(p, g, sha);
+    if (rendered == -2)
+        return PROVE_PRODUCER_FAILED;
+    if (rendered != 0 || fflush(p->memory) != 0 || ferror(p->memory))
+        return PROVE_NO_MEMORY;
+    long end = ftell(p->memory);
+    if (end < 0)
+        return PROVE_NO_MEMORY;
+    p->cert_len = (size_t)end;
+    pw_check_parsed(g, graph, graph_len, p->cert, p->cert_len, v);
+    return v->status == PW_ACCEPTED ? PROVE_ACCEPTED : PROVE_REFUSED;
+}

@@ -1,0 +1,119 @@
+/*
+ * cert_write.c - the certificate text.  At 10^7 edges the file has about
+ * 2 * 10^7 numbers, so numbers are formatted by hand into a large buffer and
+ * handed to stdio in big blocks.
+ */
+#include <stdlib.h>
+#include <string.h>
+
+#include "certify.h"
+
+#define OUT_BUFFER 65536
+
+typedef struct {
+    FILE *out;
+    size_t len;
+    int failed;
+    char buf[OUT_BUFFER];
+} writer;
+
+static void flush(writer *w)
+{
+    if (w->len > 0 && !w->failed && fwrite(w->buf, 1, w->len, w->out) != w->len)
+        w->failed = 1;
+    w->len = 0;
+}
+
+static void put_text(writer *w, const char *text)
+{
+    size_t n = strlen(text);
+    if (w->len + n > OUT_BUFFER)
+        flush(w);
+    memcpy(w->buf + w->len, text, n);
+    w->len += n;
+}
+
+/* Space, then the number: the separator every list in the format uses. */
+static void put_number(writer *w, uint32_t x)
+{
+    char digits[12];
+    int k = 0;
+    if (w->len + 12 > OUT_BUFFER)
+        flush(w);
+    do {
+        digits[k++] = (char)('0' + x % 10u);
+        x /= 10u;
+    } while (x != 0);
+    w->buf[w->len++] = ' ';
+    while (k > 0)
+        w->buf[w->len++] = digits[--k];
+}
+
+static void put_header(writer *w, const unsigned char *sha)
+{
+    static const char hex[] = "0123456789abcdef";
+    put_text(w, "certificate 1\n");
+    if (sha == NULL)
+        return;
+    char line[13 + 64 + 2] = "graph-sha256 ";
+    for (int i = 0; i < 32; i++) {
+        line[13 + 2 * i] = hex[sha[i] >> 4];
+        line[14 + 2 * i] = hex[sha[i] & 15];
+    }
+    line[77] = '\n';
+    line[78] = '\0';
+    put_text(w, line);
+}
+
+static void put_rotation(writer *w, const pw_graph *g, const uint32_t *rot)
+{
+    put_text(w, "claim planar\n");
+    for (uint32_t v = 0; v < g->n; v++) {
+        put_text(w, "around");
+        put_number(w, v);
+        put_text(w, " :");
+        if (v < g->n_adj)
+            for (uint32_t i = g->first[v]; i < g->first[v + 1]; i++)
+                put_number(w, g->ends[rot[i] ^ 1u]);
+        put_text(w, "\n");
+    }
+}
+
+static void put_subdivision(writer *w, const pp_result *r)
+{
+    int k5 = r->kind == PP_K5;
+    put_text(w, "claim nonplanar\n");
+    put_text(w, k5 ? "subdivision k5" : "subdivision k33");
+    for (int i = 0; i < (k5 ? 5 : 6); i++) {
+        if (!k5 && i == 3)
+            put_text(w, " /");
+        put_number(w, r->branch[i]);
+    }
+    put_text(w, "\n");
+    for (int p = 0; p < (k5 ? 10 : 9); p++) {
+        put_text(w, "path");
+        for (uint32_t i = r->path_start[p]; i < r->path_start[p + 1]; i++)
+            put_number(w, r->path[i]);
+        put_text(w, "\n");
+    }
+}
+
+int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
+                  const unsigned char *graph_sha256)
+{
+    writer *w = malloc(sizeof *w); /* 64 KiB: kept off the stack */
+    if (w == NULL)
+        return -1;
+    w->out = out;
+    w->len = 0;
+    w->failed = 0;
+    put_header(w, graph_sha256);
+    if (r->kind == PP_PLANAR)
+        put_rotation(w, g, r->rot);
+    else
+        put_subdivision(w, r);
+    flush(w);
+    int failed = w->failed || fflush(out) != 0;
+    free(w);
+    return failed ? -1 : 0;
+}

@@ -1,0 +1,126 @@
+/*
+ * certify.c - pp_certify(): allocation, the run, and the hand-over of either
+ * the rotation system or the Kuratowski subdivision.
+ */
+#define _DEFAULT_SOURCE /* madvise's MADV_HUGEPAGE where the system has it */
+#include <stdlib.h>
+#include <string.h>
+#include <sys/mman.h>
+
+#include "pp_state.h"
+
+typedef struct {
+    uint32_t *block; /* all per-vertex arrays */
+    uint8_t *flipped;
+} pp_memory;
+
+/*
+ * Large arrays are aligned to 2 MiB and offered to the kernel as huge-page
+ * candidates: these arrays are touched at random, and on virtual machines a
+ * first-touch fault per 4 KiB page is a large share of the run time.
+ */
+static void *alloc_large(size_t bytes)
+{
+    const size_t huge = (size_t)2 << 20;
+    if (bytes < 2 * huge)
+        return malloc(bytes);
+    void *p = NULL;
+    if (posix_memalign(&p, huge, bytes) != 0)
+        return NULL;
+#ifdef MADV_HUGEPAGE
+    madvise(p, bytes - bytes % huge, MADV_HUGEPAGE);
+#endif
+    return p;
+}
+
+static void release(pp_state *s, pp_memory *mem)
+{
+    free(mem->block);
+    free(mem->flipped);
+    free(s->nxt);
+    free(s->prv);
+    free(s->stack);
+    s->stack = NULL;
+    mem->block = NULL;
+    mem->flipped = NULL;
+    s->nxt = s->prv = NULL;
+}
+
+/* Carves the per-vertex arrays out of one block: 18 words per vertex. */
+static int allocate(pp_state *s, pp_memory *mem, const pw_graph *g)
+{
+    size_t n = g->n_adj, darts = 2 * (size_t)g->m;
+    memset(s, 0, sizeof *s);
+    s->g = g;
+    s->n = g->n_adj;
+    mem->block = alloc_large((18 * n + 1) * sizeof(uint32_t));
+    mem->flipped = malloc(n + 1);
+    s->nxt = alloc_large((darts + 1) * sizeof(uint32_t));
+    s->prv = alloc_large((darts + 1) * sizeof(uint32_t));
+    if (mem->block == NULL || mem->flipped == NULL || s->nxt == NULL || s->prv == NULL) {
+        release(s, mem);
+        return PP_ERR_NOMEM;
+    }
+    uint32_t *p = mem->block;
+    uint32_t **one[] = {&s->vertex_of, &s->dfi_of,    &s->parent,    &s->lowpoint,
+                        &s->least_anc, &s->back_dart, &s->pert_tail, &s->pert_next,
+                        &s->sep_head,  &s->sep_next};
+    for (size_t i = 0; i < sizeof one / sizeof one[0]; i++, p += n)
+        *one[i] = p;
+    s->head = p;
+    p += 2 * n;
+    s->visited = p;
+    p += 2 * n;
+    s->ext = p;
+    s->flipped = mem->flipped;
+    return 0;
+}
+
+static int certify_planar(pp_state *s, pp_result *r)
+{
+    uint32_t *rot = s->prv; /* prv is dead once the lists are final */
+    int got = pp_finish_embedding(s, rot);
+    s->prv = NULL;
+    if (got != 0) {
+        free(rot);
+        return got;
+    }
+    r->kind = PP_PLANAR;
+    r->rot = rot;
+    return 0;
+}
+
+int pp_certify(const pw_graph *g, pp_result *r)
+{
+    memset(r, 0, sizeof *r);
+    if (g->n_adj > (1u << 30))
+        return PP_ERR_NOMEM; /* ids would not fit the packed outer-face links */
+    pp_state s;
+    pp_memory mem;
+    if (allocate(&s, &mem, g) != 0)
+        return PP_ERR_NOMEM;
+    pp_dfs(&s, s.back_dart, s.pert_next); /* scratch: both are reset before the run */
+    pp_sort_children(&s, s.visited, s.visited + s.n);
+    pp_prepare_run(&s);
+    uint32_t v = 0, root = PP_NIL;
+    pp_run_outcome why = pp_run(&s, &v, &root);
+    int got = why == PP_RUN_PLANAR  ? certify_planar(&s, r)
+              : why == PP_RUN_NOMEM ? PP_ERR_NOMEM
+                                    : pp_isolate(&s, why, v, root, r);
+    release(&s, &mem);
+    if (got != 0)
+        pp_result_free(r);
+    return got;
+}
+
+void pp_result_free(pp_result *r)
+{
+    free(r->rot);
+    free(r->path);
+    memset(r, 0, sizeof *r);
+}
+
+unsigned pp_path_count(const pp_result *r)
+{
+    return r->kind == PP_K5 ? 10u : r->kind == PP_K33 ? 9u : 0u;
+}
