@@ -112,14 +112,9 @@ static int read_edges(pw_lexer *lx, pw_graph *g, uint32_t room)
     return 0;
 }
 
-/* Groups darts by their source vertex (a counting sort, stable in edge order). */
-static int build_adjacency(pw_graph *g)
+void pw_graph_group_darts(pw_graph *g)
 {
     size_t darts = 2 * (size_t)g->m;
-    g->first = pw_alloc((size_t)g->n_adj + 1, sizeof *g->first);
-    g->darts = pw_alloc(darts, sizeof *g->darts);
-    if (g->first == NULL || g->darts == NULL)
-        return -1;
     memset(g->first, 0, ((size_t)g->n_adj + 1) * sizeof *g->first);
     for (size_t d = 0; d < darts; d++)
         g->first[g->ends[d] + 1]++;
@@ -130,6 +125,15 @@ static int build_adjacency(pw_graph *g)
     for (uint32_t v = g->n_adj; v > 0; v--)
         g->first[v] = g->first[v - 1];
     g->first[0] = 0;
+}
+
+static int build_adjacency(pw_graph *g)
+{
+    g->first = pw_alloc((size_t)g->n_adj + 1, sizeof *g->first);
+    g->darts = pw_alloc(2 * (size_t)g->m, sizeof *g->darts);
+    if (g->first == NULL || g->darts == NULL)
+        return -1;
+    pw_graph_group_darts(g);
     return 0;
 }
 

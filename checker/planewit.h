@@ -170,6 +170,14 @@ pw_code pw_graph_parse(const char *buf, size_t len, const pw_limits *lim,
 void pw_graph_free(pw_graph *g);
 
 /*
+ * Fills first[] and darts[] from ends[] (a counting sort, stable in edge
+ * order).  The caller MUST have set n_adj to 1 + the largest id in ends[] and
+ * sized first[] to n_adj + 1 and darts[] to 2m.  For producers that build
+ * graphs without text; it does not look for repeated edges.
+ */
+void pw_graph_group_darts(pw_graph *g);
+
+/*
  * The whole check.  graph/cert are the files' exact bytes.  Always fills *v,
  * including both SHA-256 digests and the counts known at the point of failure.
  * Returns v->status.

@@ -27,7 +27,7 @@ static int ensure_room(graph_view *view, uint32_t vertices, size_t darts)
     return 0;
 }
 
-/* The same grouping as the kernel's graph parser: a counting sort, stable in edge order. */
+/* The kernel's own grouping of darts, on arrays that live across graphs. */
 int graph_view_build(graph_view *view, const edge_list *el)
 {
     pw_graph *g = &view->g;
@@ -42,16 +42,7 @@ int graph_view_build(graph_view *view, const edge_list *el)
     g->m = el->m;
     g->n_adj = n_adj;
     g->ends = el->ends;
-    memset(g->first, 0, ((size_t)n_adj + 1) * sizeof *g->first);
-    for (size_t d = 0; d < darts; d++)
-        g->first[g->ends[d] + 1]++;
-    for (uint32_t v = 0; v < n_adj; v++)
-        g->first[v + 1] += g->first[v];
-    for (size_t d = 0; d < darts; d++)
-        g->darts[g->first[g->ends[d]]++] = (uint32_t)d;
-    for (uint32_t v = n_adj; v > 0; v--)
-        g->first[v] = g->first[v - 1];
-    g->first[0] = 0;
+    pw_graph_group_darts(g);
     return 0;
 }
 
