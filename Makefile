@@ -31,7 +31,7 @@ all: $(BIN) kernel-size
 
 $(BUILD)/%.o: %.c
 	@mkdir -p $(dir $@)
-	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -Ichecker -Iproducer -Icli -c $< -o $@
+	$(CC) $(CFLAGS) $(CRYPTO_CFLAGS) -MMD -MP -Ichecker -Iproducer -Icli -c $< -o $@
 
 # What the binary says about itself in sign-off records (cli/buildinfo.c): the
 # compiler, the flags, and the digest of the vector set (vectors/SHA256SUMS)
@@ -98,7 +98,7 @@ help:
 	@echo "make bench-draw   drawing at 10^6 edges vs Boost, results in bench/results-draw.md"
 	@echo "make clean      remove $(BUILD)/"
 
--include $(KERNEL_OBJ:.o=.d)
+-include $(wildcard $(BUILD)/*/*.d)
 
 # ---- Hardening: sanitizers, valgrind, coverage, fuzzing, lint, mutation -----
 # Results and how to read them: bench/results-hardening.md.  `make help-hardening`.

@@ -50,7 +50,7 @@ int pw_check_bipartite_bound(const pw_graph *g, const char *graph, size_t graph_
         return pw_fail(v, PW_R_BIPARTITE_BOUND, PW_FILE_CERT, c->head_line,
                        "N = %lld and M = %lld: need N >= 3 and M > 2N - 4 = %lld", (long long)n,
                        (long long)m, (long long)(2 * n - 4));
-    const uint32_t *side = c->values + c->items[0].start;
+    const uint32_t *side = pw_item_values(c, &c->items[0]);
     for (uint32_t e = 0; e < g->m; e++) {
         uint32_t a = g->ends[2 * (size_t)e], b = g->ends[2 * (size_t)e + 1];
         if (side[a] == side[b])

@@ -37,6 +37,11 @@ void pw_cert_free(pw_cert *c)
     memset(c, 0, sizeof *c);
 }
 
+uint32_t *pw_item_values(const pw_cert *c, const pw_item *it)
+{
+    return c->values != NULL ? c->values + it->start : NULL;
+}
+
 static int no_memory(parser *p)
 {
     return pw_fail(p->lx.v, PW_E_NOMEM, PW_FILE_CERT, p->lx.line, "no memory for the certificate");

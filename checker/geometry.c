@@ -118,7 +118,7 @@ static int angle_less(pw_xy u, pw_xy w)
 static int check_order(drawing *d, const pw_item *it)
 {
     const pw_graph *g = d->g;
-    const uint32_t *darts = d->c->values + it->start;
+    const uint32_t *darts = pw_item_values(d->c, it);
     uint32_t x = it->key, descents = 0;
     for (uint32_t i = 0; i < it->count; i++) {
         uint32_t a = g->ends[darts[i] ^ 1u], b = g->ends[darts[(i + 1) % it->count] ^ 1u];

@@ -98,6 +98,8 @@ typedef struct {
 } pw_cert;
 
 int pw_cert_parse(const char *buf, size_t len, uint32_t n, pw_cert *c, pw_verdict *v);
+/* The values of one line; NULL when no line of the file has any (no pointer arithmetic on NULL). */
+uint32_t *pw_item_values(const pw_cert *c, const pw_item *it);
 void pw_cert_free(pw_cert *c);
 
 /* ---- the checks: 0 accepted, -1 with the verdict filled ----------------- */

@@ -49,7 +49,7 @@ static int check_lines(minor *s)
 /* An isolated vertex has no edge: alone it joins no set, with others it splits its set. */
 static int claim_members(minor *s, const pw_item *it)
 {
-    const uint32_t *list = s->c->values + it->start;
+    const uint32_t *list = pw_item_values(s->c, it);
     for (uint32_t k = 0; k < it->count; k++) {
         uint32_t x = list[k];
         if (x >= s->g->n_adj && it->count == 1)
@@ -69,7 +69,7 @@ static int claim_members(minor *s, const pw_item *it)
 static int check_connected(minor *s, const pw_item *it)
 {
     const pw_graph *g = s->g;
-    const uint32_t *list = s->c->values + it->start;
+    const uint32_t *list = pw_item_values(s->c, it);
     uint32_t head = 0, tail = 0, mine = it->key, seen = s->sets + mine;
     s->queue[tail++] = list[0];
     s->owner[list[0]] = seen;

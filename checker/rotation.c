@@ -78,7 +78,7 @@ static int first_unlisted(rotation *r, const pw_item *it)
 static int match_list(rotation *r, const pw_item *it)
 {
     const pw_graph *g = r->g;
-    uint32_t v = it->key, deg = pw_degree(g, v), *list = r->c->values + it->start;
+    uint32_t v = it->key, deg = pw_degree(g, v), *list = pw_item_values(r->c, it);
     for (uint32_t i = 0; i < deg; i++) {
         uint32_t d = g->darts[g->first[v] + i];
         r->mark[g->ends[d ^ 1u]] = d;

@@ -46,7 +46,7 @@ static int distinct_branches(const subdivision *s)
 /* The path must join a pair K5 (any two) or K3,3 (one per side) requires, once. */
 static int check_ends(subdivision *s, const pw_item *it)
 {
-    const uint32_t *p = s->c->values + it->start;
+    const uint32_t *p = pw_item_values(s->c, it);
     uint32_t a = p[0], b = p[it->count - 1];
     int i = branch_index(s, a), j = branch_index(s, b);
     if (i < 0 || j < 0 || i == j || (s->k33 && (i < 3) == (j < 3)))
@@ -62,7 +62,7 @@ static int check_ends(subdivision *s, const pw_item *it)
 
 static int check_path(subdivision *s, const pw_item *it, uint32_t index)
 {
-    const uint32_t *p = s->c->values + it->start;
+    const uint32_t *p = pw_item_values(s->c, it);
     if (check_ends(s, it) != 0)
         return -1;
     for (uint32_t k = 1; k < it->count; k++) {

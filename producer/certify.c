@@ -40,7 +40,8 @@ static void release(pp_state *s, pp_memory *mem)
     free(s->nxt);
     free(s->prv);
     free(s->stack);
-    s->stack = NULL;
+    free(s->tgt);
+    s->stack = s->tgt = NULL;
     mem->block = NULL;
     mem->flipped = NULL;
     s->nxt = s->prv = NULL;
@@ -57,7 +58,9 @@ static int allocate(pp_state *s, pp_memory *mem, const pw_graph *g)
     mem->flipped = malloc(n + 1);
     s->nxt = alloc_large((darts + 1) * sizeof(uint32_t));
     s->prv = alloc_large((darts + 1) * sizeof(uint32_t));
-    if (mem->block == NULL || mem->flipped == NULL || s->nxt == NULL || s->prv == NULL) {
+    s->tgt = alloc_large((darts + 1) * sizeof(uint32_t));
+    if (mem->block == NULL || mem->flipped == NULL || s->nxt == NULL || s->prv == NULL ||
+        s->tgt == NULL) {
         release(s, mem);
         return PP_ERR_NOMEM;
     }
@@ -104,6 +107,8 @@ int pp_certify(const pw_graph *g, pp_result *r)
     pp_prepare_run(&s);
     uint32_t v = 0, root = PP_NIL;
     pp_run_outcome why = pp_run(&s, &v, &root);
+    free(s.tgt); /* only the steps read it; the later phases are lighter */
+    s.tgt = NULL;
     int got = why == PP_RUN_PLANAR  ? certify_planar(&s, r)
               : why == PP_RUN_NOMEM ? PP_ERR_NOMEM
                                     : pp_isolate(&s, why, v, root, r);

@@ -13,7 +13,7 @@
 #else
 #define PREFETCH(p) ((void)0)
 #endif
-#define AHEAD 8 /* darts looked up ahead of the one being examined */
+#define AHEAD 3 /* darts looked up ahead of the one being examined */
 
 static uint32_t min_u32(uint32_t a, uint32_t b) { return a < b ? a : b; }
 
@@ -21,10 +21,10 @@ static uint32_t min_u32(uint32_t a, uint32_t b) { return a < b ? a : b; }
 static void start_piece(pp_state *s, uint32_t x, uint32_t dart)
 {
     uint32_t r = s->n + x, back = dart ^ 1u;
-    s->head[r] = dart; /* both lists are new: one dart each; nxt comes later */
-    s->prv[dart] = dart;
+    s->head[r] = dart; /* both lists are new: one dart each */
+    s->nxt[dart] = s->prv[dart] = dart;
     s->head[x] = back;
-    s->prv[back] = back;
+    s->nxt[back] = s->prv[back] = back;
     s->ext[2 * r] = pp_pack(x, 1);
     s->ext[2 * r + 1] = pp_pack(x, 0);
     s->ext[2 * x] = pp_pack(r, 1);
@@ -54,7 +54,7 @@ static uint32_t number_vertex(pp_state *s, uint32_t u, uint32_t p, uint32_t dart
  * shuffled ids each one is a cache miss.
  */
 static void search_from(pp_state *s, uint32_t root, uint32_t *next_dfi, uint32_t *iter,
-                        uint32_t *work, const uint32_t *nbr)
+                        uint32_t *work, uint32_t *nbr)
 {
     const pw_graph *g = s->g;
     uint32_t top = 0;
@@ -70,13 +70,16 @@ static void search_from(pp_state *s, uint32_t root, uint32_t *next_dfi, uint32_t
                 fresh = i++;
                 break;
             }
+            nbr[i] = y; /* from now on the slot holds the neighbour's DFI */
             if (y < low && y != p)
                 low = y;
         }
         iter[x] = i;
         s->least_anc[x] = low;
         if (fresh != PP_NIL) {
-            work[top++] = number_vertex(s, nbr[fresh], x, g->darts[fresh], next_dfi, iter);
+            uint32_t c = number_vertex(s, nbr[fresh], x, g->darts[fresh], next_dfi, iter);
+            nbr[fresh] = c | PP_TREE;
+            work[top++] = c;
             continue;
         }
         top--;
@@ -93,21 +96,14 @@ void pp_dfs(pp_state *s, uint32_t *iter, uint32_t *work)
         s->head[x] = PP_NIL;
     for (uint32_t u = 0; u < s->n; u++)
         s->dfi_of[u] = PP_NIL;
-    /* Neighbour ids in dart-list order, gathered in one streaming pass into
-       nxt (free until the pieces need it) so the search reads them in order. */
-    uint32_t *nbr = s->nxt;
+    /* Neighbour ids in dart-list order, gathered in one streaming pass so the
+       search reads them in order; it turns each into the neighbour's DFI. */
+    uint32_t *nbr = s->tgt;
     for (size_t i = 0; i < 2 * (size_t)s->g->m; i++)
         nbr[i] = s->g->ends[s->g->darts[i] ^ 1u];
     for (uint32_t u = 0; u < s->n; u++)
         if (s->dfi_of[u] == PP_NIL)
             search_from(s, u, &next_dfi, iter, work, nbr);
-    for (uint32_t x = 0; x < s->n; x++) {
-        uint32_t d = s->head[s->n + x];
-        if (d != PP_NIL) {
-            s->nxt[d] = d;
-            s->nxt[d ^ 1u] = d ^ 1u;
-        }
-    }
 }
 
 /*

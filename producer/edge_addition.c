@@ -230,11 +230,11 @@ static uint32_t child_towards(const pp_state *s, uint32_t v, uint32_t u)
 static pp_run_outcome run_step(pp_state *s, uint32_t v, uint32_t *root)
 {
     const pw_graph *g = s->g;
-    uint32_t vo = s->vertex_of[v];
-    for (uint32_t i = g->first[vo]; i < g->first[vo + 1]; i++) {
-        uint32_t d = g->darts[i], u = s->dfi_of[g->ends[d ^ 1u]];
-        if (u > v && s->parent[u] != v) {
-            s->back_dart[u] = d;
+    uint32_t vo = s->vertex_of[v], begin = g->first[vo], end = g->first[vo + 1];
+    for (uint32_t i = begin; i < end; i++) {
+        uint32_t u = s->tgt[i]; /* tree edges down carry PP_TREE: never taken */
+        if (u > v && !(u & PP_TREE)) {
+            s->back_dart[u] = g->darts[i];
             s->pending++;
             walkup(s, v, u);
         }
@@ -250,9 +250,9 @@ static pp_run_outcome run_step(pp_state *s, uint32_t v, uint32_t *root)
     }
     if (s->pending == 0)
         return PP_RUN_PLANAR;
-    for (uint32_t i = g->first[vo]; i < g->first[vo + 1]; i++) {
-        uint32_t d = g->darts[i], u = s->dfi_of[g->ends[d ^ 1u]];
-        if (u > v && s->parent[u] != v && s->back_dart[u] != PP_NIL) {
+    for (uint32_t i = begin; i < end; i++) {
+        uint32_t u = s->tgt[i];
+        if (u > v && !(u & PP_TREE) && s->back_dart[u] != PP_NIL) {
             *root = s->n + child_towards(s, v, u);
             return PP_RUN_BLOCKED_FACE;
         }

@@ -286,7 +286,7 @@ static int k5_split(pp_face *f, pp_witness *w, const pp_pocket *p, pp_conn *c, i
     uint32_t meet = c[a].u > c[b].u ? c[a].u : c[b].u, ul = c[low].u;
     uint32_t branch[6] = {pc[pos[a]], pc[pos[b]], ul, f->r, pc[pos[low]], meet};
     for (int j = 0; j < 2; j++) {
-        int o = j == 0 ? a : b, other = j == 0 ? b : a;
+        int o = j == 0 ? a : b;
         /* o to r: x and y by the rim, w by its back edge */
         if (o == 2)
             path_pert(w, pc[p->i]);
@@ -298,7 +298,6 @@ static int k5_split(pp_face *f, pp_witness *w, const pp_pocket *p, pp_conn *c, i
         else
             path_inner(f, w, o == 0 ? p->qa : p->qb, o == 0 ? p->qb : p->qa);
         pp_wit_path_to_hub(w, &c[o], meet);
-        (void)other;
     }
     path_anc(w, ul, f->v);
     pp_wit_begin(w);

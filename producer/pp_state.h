@@ -23,6 +23,7 @@
 #include "certify.h"
 
 #define PP_NIL UINT32_MAX
+#define PP_TREE (1u << 31)
 #define PP_ERR_NOMEM (-1)
 #define PP_ERR_BUG (-2)
 
@@ -35,6 +36,10 @@ typedef struct {
     uint32_t *lowpoint;  /* least DFI reachable by tree edges down, then one back edge */
     uint32_t *least_anc; /* least DFI joined to x by a back edge, or x itself */
     uint32_t *nxt, *prv; /* per dart: circular embedding lists */
+    /* Per position i of g->darts: DFI of the neighbour that dart leads to,
+       with PP_TREE set for the tree edge to a child.  Filled by the search,
+       read by every step, so the steps never chase ids at random. */
+    uint32_t *tgt;
     uint32_t *head;      /* 2n: first dart of a vertex or virtual root */
     uint32_t *ext;       /* 4n: outer-face links, see above */
     uint32_t *back_dart; /* per vertex: the pending back edge from the current step */
@@ -106,7 +111,7 @@ static inline uint32_t pp_arc_target(const pp_state *s, uint32_t d, uint32_t roo
 }
 
 /* dfs.c: numbers vertices and starts one piece per tree edge */
-void pp_dfs(pp_state *s, uint32_t *iter, uint32_t *work);
+void pp_dfs(pp_state *s, uint32_t *iter, uint32_t *work); /* fills tgt */
 void pp_sort_children(pp_state *s, uint32_t *count, uint32_t *order);
 
 /* embedding.c */
