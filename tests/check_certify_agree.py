@@ -9,7 +9,7 @@ tests/boost_driver.cpp).  The other way round, Boost's own evidence - its
 embedding, or its Kuratowski edge set pruned to a bare subdivision - written in
 planewit's certificate format must be accepted by planewit's kernel.
 
-Usage: tests/check_certify_agree.py BUILD_DIR [SEED]   (or PLANEWIT_SEED=...)
+Usage: tests/check_certify_agree.py BUILD_DIR [SEED]   (or PW_SEED=...)
 Run with Debian's /usr/bin/python3.
 """
 import os
@@ -168,8 +168,8 @@ def build_driver(build):
 
 def main():
     build = sys.argv[1] if len(sys.argv) > 1 else "build"
-    seed = int(sys.argv[2] if len(sys.argv) > 2 else os.environ.get("PLANEWIT_SEED", random.randrange(2**32)))
-    print("check_certify_agree: seed %d (rerun: PLANEWIT_SEED=%d)" % (seed, seed))
+    seed = int(sys.argv[2] if len(sys.argv) > 2 else os.environ.get("PW_SEED", random.randrange(2**32)))
+    print("check_certify_agree: seed %d (rerun: PW_SEED=%d)" % (seed, seed))
     rng = random.Random(seed)
     bin_path = os.path.join(build, "planewit")
     driver = build_driver(build)
