@@ -1,10 +1,11 @@
 /* cmd_check.c - `planewit check GRAPH CERT [--json]`: run the kernel, report, exit. */
 #include "cli.h"
+#include "import.h"
 
 #include <string.h>
 
 static const char check_usage[] =
-    "usage: planewit check GRAPH CERT [--json] [--record FILE [--note TEXT]]\n"
+    "usage: planewit check GRAPH CERT [--json] [--record FILE [--note TEXT]] [--names FILE]\n"
     "                      [--max-vertices N] [--max-edges M] [--max-bytes B]\n"
     "\n"
     "Checks that the certificate CERT proves its claim (planar or nonplanar) about the\n"
@@ -13,6 +14,8 @@ static const char check_usage[] =
     "  --json            print one JSON verdict record instead of the human line\n"
     "  --record FILE     also write a sign-off record to FILE (format-spec/signoff-record.md)\n"
     "  --note TEXT       a note for the sign-off record, e.g. the design revision\n"
+    "  --names FILE      after a rejection, name the vertices it mentions by this names\n"
+    "                    file (format-spec/names.md, as 'planewit import' writes it)\n"
     "  --max-vertices N  refuse graphs with more than N vertices (default 100000000)\n"
     "  --max-edges M     refuse graphs with more than M edges (default 300000000)\n"
     "  --max-bytes B     refuse files larger than B bytes (default 4294967296)\n"
@@ -24,7 +27,7 @@ static const char check_usage[] =
 typedef struct {
     const char *graph, *cert;
     int json;
-    const char *record, *note;
+    const char *record, *note, *names;
     pw_limits lim;
 } check_args;
 
@@ -46,12 +49,15 @@ static int parse_args(int argc, char **argv, check_args *a)
         }
         if (strcmp(arg, "--json") == 0) {
             a->json = 1;
-        } else if (strcmp(arg, "--record") == 0 || strcmp(arg, "--note") == 0) {
+        } else if (strcmp(arg, "--record") == 0 || strcmp(arg, "--note") == 0 ||
+                   strcmp(arg, "--names") == 0) {
             if (i + 1 >= argc) {
                 fprintf(stderr, "planewit check: %s needs a value\n", arg);
                 return -1;
             }
-            const char **value = strcmp(arg, "--record") == 0 ? &a->record : &a->note;
+            const char **value = strcmp(arg, "--record") == 0 ? &a->record
+                                 : strcmp(arg, "--note") == 0 ? &a->note
+                                                              : &a->names;
             *value = argv[++i];
         } else if (arg[0] == '-' && arg[1] != '\0') {
             fprintf(stderr, "planewit check: unknown option '%s'\n", arg);
@@ -91,6 +97,23 @@ static int write_record(const check_args *a, const pw_verdict *v, const cli_inpu
     return CLI_EXIT_USAGE;
 }
 
+/* The names legend under a rejection; a names file that does not fit the graph is refused. */
+static int report_names(const check_args *a, const pw_verdict *v)
+{
+    cli_input in;
+    name_table names = {0};
+    if (v->status != PW_REJECTED || a->json)
+        return 0;
+    if (cli_read_input(&in, a->names, &a->lim) != 0)
+        return -1;
+    int rc = names_read(&in, (uint32_t)v->vertices, v->graph_sha256, &names);
+    cli_free_input(&in);
+    if (rc == 0)
+        cli_print_name_legend(stdout, v, &names);
+    name_table_free(&names);
+    return rc;
+}
+
 static void report(const check_args *a, const pw_verdict *v)
 {
     if (a->json)
@@ -116,7 +139,7 @@ static int unreadable(const check_args *a, pw_file which, pw_code code)
 
 int cmd_check(int argc, char **argv)
 {
-    check_args a = {NULL, NULL, 0, NULL, NULL, {0, 0, 0}};
+    check_args a = {NULL, NULL, 0, NULL, NULL, NULL, {0, 0, 0}};
     cli_input graph, cert;
     pw_verdict v;
     int parsed = parse_args(argc, argv, &a);
@@ -135,6 +158,8 @@ int cmd_check(int argc, char **argv)
     }
     pw_check(graph.bytes, graph.len, cert.bytes, cert.len, &a.lim, &v);
     report(&a, &v);
+    if (a.names != NULL && report_names(&a, &v) != 0)
+        fprintf(stderr, "planewit check: %s: names not shown\n", a.names);
     int status = a.record != NULL ? write_record(&a, &v, &graph) : (int)v.status;
     cli_free_input(&graph);
     cli_free_input(&cert);

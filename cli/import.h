@@ -149,6 +149,8 @@ int names_read(const cli_input *in, uint32_t n, const unsigned char graph_sha256
                name_table *t);
 /* 1 when every byte of name[0..len-1] may stand in a name (printable, no '#' or ','). */
 int names_valid_byte(unsigned char c);
+/* After a rejection: "names: 4 = R12, 9 = J3" for the vertices its detail names (name_legend.c). */
+void cli_print_name_legend(FILE *out, const pw_verdict *v, const name_table *t);
 
 /* ---- the importers: each fills el (and names, for edge lists) ----------- */
 

@@ -4,24 +4,7 @@
 # Usage: tests/check_cli.sh BUILD_DIR
 set -u
 bin=${1:-build}/planewit
-tmp=$(mktemp -d)
-trap 'rm -rf "$tmp"' EXIT
-pass=0
-fail=0
-
-expect() { # name expected-exit expected-output-substring command...
-    name=$1 want=$2 text=$3
-    shift 3
-    "$@" >"$tmp/out" 2>&1
-    got=$?
-    if [ "$got" -ne "$want" ]; then
-        echo "FAIL $name: exit $got, expected $want"; sed 's/^/    /' "$tmp/out"; fail=$((fail + 1))
-    elif ! grep -qF -- "$text" "$tmp/out"; then
-        echo "FAIL $name: output lacks '$text'"; sed 's/^/    /' "$tmp/out"; fail=$((fail + 1))
-    else
-        pass=$((pass + 1))
-    fi
-}
+. "$(dirname "$0")/expect.sh"
 
 printf 'graph 3 3\n0 1\n1 2\n2 0\n' >"$tmp/tri.graph"
 printf 'certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 1\n' >"$tmp/tri.cert"
@@ -76,7 +59,7 @@ expect huge-header 1 "[around-count]" sh -c "ulimit -v 65536; \"$bin\" check \"$
 # Same case, two paths: the verdict record is the same from a file and from standard input.
 "$bin" check "$tmp/tri.graph" "$tmp/bad.cert" --json | sed 's/"path":"[^"]*"//g' >"$tmp/a.json"
 "$bin" check "$tmp/tri.graph" - --json <"$tmp/bad.cert" | sed 's/"path":"[^"]*"//g' >"$tmp/b.json"
-if cmp -s "$tmp/a.json" "$tmp/b.json"; then pass=$((pass + 1)); else echo "FAIL file-vs-stdin record"; fail=$((fail + 1)); fi
+if cmp -s "$tmp/a.json" "$tmp/b.json"; then ok; else bad "file-vs-stdin record"; fi
 
 # A 10^6-vertex path checked with a 256 KiB stack: the kernel does not recurse.
 awk 'BEGIN { n = 1000000; print "graph", n, n - 1; for (i = 0; i < n - 1; i++) print i, i + 1 }' >"$tmp/path.graph"
@@ -84,6 +67,19 @@ awk 'BEGIN { n = 1000000; print "certificate 1\nclaim planar"; print "around 0 :
              for (i = 1; i < n - 1; i++) print "around", i, ":", i - 1, i + 1; print "around", n - 1, ":", n - 2 }' >"$tmp/path.cert"
 expect deep-path 0 "1000000 vertices, 999999 edges, 1 face, 1 component" \
     sh -c "ulimit -s 256; \"$bin\" check \"$tmp/path.graph\" \"$tmp/path.cert\""
+
+# Names from an imported edge list label the vertices a rejection mentions, and only those
+# (the counts in an Euler message are not vertices).
+printf 'U1 R5\nR5 C3\nC3 U1\nU1 J9\n' >"$tmp/net.txt"
+"$bin" import --from edges "$tmp/net.txt" -o "$tmp/net.graph" 2>/dev/null
+printf 'certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 2\naround 2 : 1 3\naround 3 : 0\n' >"$tmp/net.cert"
+expect names-legend 1 "names: 2 = C3, 3 = J9" "$bin" check "$tmp/net.graph" "$tmp/net.cert" --names "$tmp/net.graph.names"
+printf 'a b\na c\na d\nb c\nb d\nc d\n' >"$tmp/k4.txt"
+"$bin" import --from edges "$tmp/k4.txt" -o "$tmp/k4.graph" 2>/dev/null
+printf 'certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 0 2 3\naround 2 : 0 1 3\naround 3 : 0 2 1\n' >"$tmp/k4.cert"
+"$bin" check "$tmp/k4.graph" "$tmp/k4.cert" --names "$tmp/k4.graph.names" >"$tmp/out" 2>&1
+if grep -q '\[euler\]' "$tmp/out" && grep -qx 'names: 0 = a' "$tmp/out"; then pass=$((pass + 1)); else
+    echo "FAIL names-euler: expected only vertex 0 named"; sed 's/^/    /' "$tmp/out"; fail=$((fail + 1)); fi
 
 # Output to a pipe or device is written through it, never replaced by a file (a rename over
 # /dev/null once turned it into a regular file).
@@ -93,10 +89,9 @@ reader=$!
 "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --record "$tmp/pipe" >/dev/null 2>&1
 wait "$reader"
 if [ -p "$tmp/pipe" ] && grep -q '"verdict":"accepted"' "$tmp/piped"; then
-    pass=$((pass + 1))
+    ok
 else
-    echo "FAIL record through a pipe: the pipe was replaced or nothing came through"; fail=$((fail + 1))
+    bad "record through a pipe: the pipe was replaced or nothing came through"
 fi
 
-echo "cli: $pass passed, $fail failed"
-[ "$fail" -eq 0 ]
+finish cli
