@@ -8,12 +8,38 @@
 #include "internal.h"
 
 #include <openssl/evp.h>
+#include <pthread.h>
+#include <stdlib.h>
 #include <string.h>
+
+/*
+ * The SHA-256 implementation is looked up once per process: looking it up on
+ * every call cost more than hashing a small file (a third of a stream of tiny
+ * graphs).  pthread_once makes the lookup safe for threaded callers.
+ */
+static EVP_MD *sha256_method;
+static pthread_once_t sha256_once = PTHREAD_ONCE_INIT;
+
+static void release_sha256(void)
+{
+    EVP_MD_free(sha256_method);
+}
+
+static void fetch_sha256(void)
+{
+    sha256_method = EVP_MD_fetch(NULL, "SHA256", NULL);
+    if (sha256_method != NULL)
+        atexit(release_sha256);
+}
 
 static int sha256(const char *buf, size_t len, unsigned char out[32])
 {
     unsigned int size = 0;
-    return EVP_Digest(buf, len, out, &size, EVP_sha256(), NULL) == 1 && size == 32 ? 0 : -1;
+    pthread_once(&sha256_once, fetch_sha256);
+    return sha256_method != NULL && EVP_Digest(buf, len, out, &size, sha256_method, NULL) == 1 &&
+                   size == 32
+               ? 0
+               : -1;
 }
 
 static int digests(const char *graph, size_t graph_len, const char *cert, size_t cert_len,
