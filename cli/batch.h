@@ -49,7 +49,7 @@ void batch_check_job(const job_list *list, size_t index, const pw_limits *lim,
 typedef struct {
     size_t first, count;
 } batch_shard;
-int batch_shard_parse(const char *text, batch_shard *shard);
+int batch_shard_parse(const char *who, const char *text, batch_shard *shard);
 size_t batch_shard_size(const batch_shard *shard, size_t jobs);
 
 /* Progress on stderr (progress.c). */

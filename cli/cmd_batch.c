@@ -72,7 +72,7 @@ static int value_option(int argc, char **argv, int *i, batch_args *a)
         rc = parse_number(name, value, 86400, &seconds);
         a->progress_every = (double)seconds;
     } else if (strcmp(name, "--shard") == 0) {
-        rc = batch_shard_parse(value, &a->shard);
+        rc = batch_shard_parse("batch", value, &a->shard);
     } else {
         a->output = value;
         rc = 0;

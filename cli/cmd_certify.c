@@ -8,11 +8,13 @@
 #include "prove.h"
 
 #include <stdarg.h>
+#include <stdlib.h>
 #include <string.h>
 
 static const char certify_usage[] =
     "usage: planewit certify GRAPH [-o CERT] [--json] [--witness cheapest] [--names NAMES]\n"
-    "       planewit certify --graph6 FILE|- [--summary] [--witness cheapest]\n"
+    "       planewit certify --graph6 FILE|- [--summary] [--witness cheapest] [-j K]\n"
+    "                        [--shard I/K]\n"
     "       (both take [--max-vertices N] [--max-edges M] [--max-bytes B])\n"
     "\n"
     "Finds a certificate for GRAPH (format-spec/graph.md): a rotation system when it\n"
@@ -30,6 +32,16 @@ static const char certify_usage[] =
     "                      input); one line per graph, then the counts.  The last line\n"
     "                      is 'graphs=T planar=P nonplanar=Q'\n"
     "  --summary           with --graph6: print the counts only\n"
+    "  -j K                with --graph6: K worker threads (default: the online CPUs);\n"
+    "                      the output is the same for every K\n"
+    "  --shard I/K         with --graph6: only records I, I+K, I+2K, ... (0-based; line L\n"
+    "                      is record L-1), for spreading one stream over K runs.  The\n"
+    "                      per-graph lines keep their line numbers; the counts of the K\n"
+    "                      runs add up to those of one whole run, and this adds them:\n"
+    "    awk -F'[=: ]+' '/^nonplanar by /{if(!($3 in n))o[++k]=$3; n[$3]+=$4}\n"
+    "      /^graphs=/{t+=$2; p+=$4; q+=$6}\n"
+    "      END{for(i=1;i<=k;i++) print \"nonplanar by \" o[i] \": \" n[o[i]];\n"
+    "      print \"graphs=\" t \" planar=\" p \" nonplanar=\" q}' shard-*.txt\n"
     "  --max-bytes B       the largest graph file; with --graph6, the longest record\n"
     "\n"
     "Exit status: 0 certified (planar or not), 2 unusable input or usage error,\n"
@@ -48,12 +60,31 @@ static int usage_error(const char *fmt, ...)
     return -1;
 }
 
+/* -j K and --shard I/K (cmd_batch.c's meaning); 1 taken, -1 error printed. */
+static int stream_option(const char *name, const char *value, certify_args *a)
+{
+    if (strcmp(name, "--shard") == 0) {
+        a->sharded = 1;
+        if (batch_shard_parse("certify", value, &a->shard) == 0)
+            return 1;
+        fputs("Try 'planewit certify --help'.\n", stderr);
+        return -1;
+    }
+    char *end;
+    unsigned long k = value[0] >= '1' && value[0] <= '9' ? strtoul(value, &end, 10) : 0;
+    if (k == 0 || *end != '\0' || k > 4096)
+        return usage_error("-j needs a number of threads from 1 to 4096, not '%s'", value);
+    a->threads = (unsigned)k;
+    return 1;
+}
+
 /* Options with a value; 1 taken, 0 not one of them, -1 error. */
 static int value_option(int argc, char **argv, int *i, certify_args *a)
 {
-    static const char *const names[] = {"-o", "--names", "--graph6", "--witness"};
-    const char **slots[] = {&a->output, &a->names, &a->graph6, NULL};
-    for (int k = 0; k < 4; k++) {
+    static const char *const names[] = {"-o", "--names", "--graph6", "--witness", "-j",
+                                        "--shard"};
+    const char **slots[] = {&a->output, &a->names, &a->graph6, NULL, NULL, NULL};
+    for (int k = 0; k < 6; k++) {
         if (strcmp(argv[*i], names[k]) != 0)
             continue;
         if (*i + 1 >= argc)
@@ -63,6 +94,8 @@ static int value_option(int argc, char **argv, int *i, certify_args *a)
             *slots[k] = value;
             return 1;
         }
+        if (k >= 4)
+            return stream_option(names[k], value, a);
         if (strcmp(value, "cheapest") != 0 && strcmp(value, "subdivision") != 0)
             return usage_error("--witness takes 'cheapest' or 'subdivision', not '%s'", value);
         a->choice = strcmp(value, "cheapest") == 0 ? WITNESS_CHEAPEST : WITNESS_SUBDIVISION;
@@ -81,6 +114,8 @@ static int check_combination(const certify_args *a)
         return usage_error("-o, --names and --json apply to a single GRAPH, not --graph6");
     if (a->graph6 == NULL && a->summary)
         return usage_error("--summary applies to --graph6 only");
+    if (a->graph6 == NULL && (a->threads != 0 || a->sharded))
+        return usage_error("-j and --shard apply to --graph6 only");
     return 0;
 }
 
@@ -88,6 +123,7 @@ static int check_combination(const certify_args *a)
 static int parse_args(int argc, char **argv, certify_args *a)
 {
     pw_limits_default(&a->lim);
+    a->shard.count = 1;
     for (int i = 1; i < argc; i++) {
         int taken = cli_limit_option(argc, argv, &i, &a->lim);
         if (taken == 0)

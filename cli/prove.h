@@ -8,7 +8,7 @@
 #ifndef PW_PROVE_H
 #define PW_PROVE_H
 
-#include "cli.h"
+#include "batch.h"
 #include "certify.h"
 #include "import.h"
 
@@ -67,6 +67,9 @@ typedef struct {
     int json, summary;
     witness_choice choice;
     pw_limits lim;
+    unsigned threads;      /* -j, with --graph6; 0: the online CPUs */
+    batch_shard shard;     /* --shard I/K, with --graph6; {0, 1}: every record */
+    int sharded;           /* --shard was given */
 } certify_args;
 
 /* `certify --graph6`: returns the exit status. */

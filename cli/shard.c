@@ -1,8 +1,10 @@
 /*
  * shard.c - `--shard I/K`: a run takes jobs I, I+K, I+2K, ... (0-based job
  * numbers, comments and blank lines not counted), so K runs with I = 0..K-1
- * take every job exactly once.  Striding rather than cutting the list into
- * blocks spreads big jobs, often written next to each other, across shards.
+ * take every job exactly once.  `certify --graph6` numbers its records the
+ * same way (every line of a graph6 stream is one record).  Striding rather
+ * than cutting the list into blocks spreads big jobs, often written next to
+ * each other, across shards.
  */
 #include "batch.h"
 
@@ -21,15 +23,15 @@ static int parse_size(const char *text, char **end, size_t *out)
     return 0;
 }
 
-/* 0, or -1 after printing what was expected. */
-int batch_shard_parse(const char *text, batch_shard *shard)
+/* 0, or -1 after printing "planewit WHO: --shard expects ...". */
+int batch_shard_parse(const char *who, const char *text, batch_shard *shard)
 {
     char *end;
     if (parse_size(text, &end, &shard->first) != 0 || *end != '/' ||
         parse_size(end + 1, &end, &shard->count) != 0 || *end != '\0' || shard->count == 0 ||
         shard->first >= shard->count) {
-        fprintf(stderr, "planewit batch: --shard expects I/K with 0 <= I < K (e.g. 0/4), "
-                "found '%s'\n", text);
+        fprintf(stderr, "planewit %s: --shard expects I/K with 0 <= I < K (e.g. 0/4), "
+                "found '%s'\n", who, text);
         return -1;
     }
     return 0;
