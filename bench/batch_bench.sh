@@ -18,25 +18,12 @@ trap 'rm -rf "$work"' EXIT
 cores=$(nproc)
 load_before=$(cut -d' ' -f1-3 /proc/loadavg)
 
-grid() { # R C GRAPH CERT: an R x C grid and a rotation system of it
-    awk -v R="$1" -v C="$2" -v G="$3" -v K="$4" 'BEGIN {
-      print "# invented benchmark input: a " R " x " C " grid" > G
-      print "graph", R * C, R * (C - 1) + (R - 1) * C > G
-      print "certificate 1\nclaim planar" > K
-      for (r = 0; r < R; r++) for (c = 0; c < C; c++) {
-        v = r * C + c; s = "around " v " :"
-        if (c + 1 < C) { print v, v + 1 > G; s = s " " (v + 1) }
-        if (r + 1 < R) print v, v + C > G
-        if (r > 0) s = s " " (v - C)
-        if (c > 0) s = s " " (v - 1)
-        if (r + 1 < R) s = s " " (v + C)
-        print s > K
-      } }'
-}
+grid_pair=$(dirname "$0")/../tests/grid_pair.awk   # an R x C grid and a rotation system of it
 
 echo "generating 2000 small pairs in $work ..." >&2
 mkdir -p "$work/small"
-awk -v dir="$work/small" 'BEGIN {
+cat >"$work/small.awk" <<'PROGRAM'
+BEGIN {
   srand(20240601)
   for (i = 0; i < 2000; i++) {
     g = dir "/p" i ".graph"; k = dir "/p" i ".cert"
@@ -47,25 +34,18 @@ awk -v dir="$work/small" 'BEGIN {
       print "certificate 1\nclaim nonplanar\nedge-bound" > k
     } else {                      # R x C grid with 10 to 1000 edges
       do { R = 2 + int(rand() * 21); C = 2 + int(rand() * 40); m = R * (C - 1) + (R - 1) * C } while (m < 10 || m > 1000)
-      print "graph", R * C, m > g
-      print "certificate 1\nclaim planar" > k
-      for (r = 0; r < R; r++) for (c = 0; c < C; c++) {
-        v = r * C + c; s = "around " v " :"
-        if (c + 1 < C) { print v, v + 1 > g; s = s " " (v + 1) }
-        if (r + 1 < R) print v, v + C > g
-        if (r > 0) s = s " " (v - C)
-        if (c > 0) s = s " " (v - 1)
-        if (r + 1 < R) s = s " " (v + C)
-        print s > k
-      }
+      grid_pair(R, C, g, k, "")
     }
     close(g); close(k)
-  } }'
+  } }
+PROGRAM
+awk -v dir="$work/small" -f "$grid_pair" -f "$work/small.awk"
 awk -v n="$jobs" 'BEGIN { for (j = 0; j < n; j++) { i = j % 2000; print "small/p" i ".graph small/p" i ".cert " (i % 10 == 9 ? "nonplanar" : "planar") } }' >"$work/small.list"
 edges=$(awk 'FNR == 2 || (FNR == 1 && $1 == "graph") { if ($1 == "graph") s += $3 } END { print s }' "$work"/small/*.graph)
 
 echo "generating a 2237 x 2236 grid (about 10^7 edges) ..." >&2
-grid 2237 2236 "$work/big.graph" "$work/big.cert"
+awk -v R=2237 -v C=2236 -v G="$work/big.graph" -v K="$work/big.cert" \
+    -v note="invented benchmark input: a 2237 x 2236 grid" -f "$grid_pair"
 big_edges=$(awk 'NR == 2 { print $3; exit }' "$work/big.graph")
 { echo "big.graph big.cert planar"; cat "$work/small.list"; } >"$work/mixed.list"
 

@@ -54,7 +54,9 @@ extern const char cli_caution[];
 void json_string(FILE *out, const char *s);
 void json_hex(FILE *out, const unsigned char *bytes, size_t n);
 
-/* SHA-256 (sha256_file.c): 0, or -1 with errno set by the failed read. */
+/* SHA-256 (sha256.c) of bytes: 0, or -1 if the library fails. */
+int cli_sha256(const char *bytes, size_t len, unsigned char out[32]);
+/* Of a stream or a file: 0, or -1 with errno set by the failed read. */
 int cli_sha256_stream(FILE *f, unsigned char out[32]);
 int cli_sha256_file(const char *path, unsigned char out[32]);
 /* A digest as 64 lowercase hex digits and a NUL, as sha256sum prints it. */

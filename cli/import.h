@@ -158,9 +158,4 @@ int import_graph6(const cli_input *in, const pw_limits *lim, edge_list *el);
 int import_dimacs(const cli_input *in, const pw_limits *lim, edge_list *el);
 int import_edges(const cli_input *in, const pw_limits *lim, edge_list *el, name_table *names);
 
-/* ---- digest.c (hex: cli_sha256_hex in sha256_file.c) -------------------- */
-
-/* SHA-256 of bytes: 0, or -1 if the library fails. */
-int cli_sha256(const char *bytes, size_t len, unsigned char out[32]);
-
 #endif

@@ -1,5 +1,6 @@
 /*
- * cert_write.c - the certificate text.  At 10^7 edges the file has about
+ * cert_write.c - the certificate text: certify's, and draw's planar one
+ * with its point lines (draw_cert.c).  At 10^7 edges the file has about
  * 2 * 10^7 numbers, so numbers are formatted by hand into a large buffer and
  * handed to stdio in big blocks.
  */
@@ -33,18 +34,22 @@ static void put_text(writer *w, const char *text)
     w->len += n;
 }
 
-/* Space, then the number: the separator every list in the format uses. */
-static void put_number(writer *w, uint32_t x)
+/* Space, then the number ('-' before a negative one, never "-0"): the
+   separator every list in the format uses. */
+static void put_number(writer *w, int64_t x)
 {
-    char digits[12];
+    char digits[20];
     int k = 0;
-    if (w->len + 12 > OUT_BUFFER)
+    uint64_t u = x < 0 ? (uint64_t)0 - (uint64_t)x : (uint64_t)x;
+    if (w->len + 2 + sizeof digits > OUT_BUFFER)
         flush(w);
     do {
-        digits[k++] = (char)('0' + x % 10u);
-        x /= 10u;
-    } while (x != 0);
+        digits[k++] = (char)('0' + u % 10u);
+        u /= 10u;
+    } while (u != 0);
     w->buf[w->len++] = ' ';
+    if (x < 0)
+        w->buf[w->len++] = '-';
     while (k > 0)
         w->buf[w->len++] = digits[--k];
 }
@@ -98,22 +103,62 @@ static void put_subdivision(writer *w, const pp_result *r)
     }
 }
 
+/* Every point line: "point v : x y". */
+static void put_points(writer *w, uint32_t n, const int64_t *x, const int64_t *y)
+{
+    for (uint32_t v = 0; v < n; v++) {
+        put_text(w, "point");
+        put_number(w, v);
+        put_text(w, " :");
+        put_number(w, x[v]);
+        put_number(w, y[v]);
+        put_text(w, "\n");
+    }
+}
+
+/* NULL when memory runs out. */
+static writer *writer_open(FILE *out)
+{
+    writer *w = malloc(sizeof *w); /* 64 KiB: kept off the stack */
+    if (w != NULL) {
+        w->out = out;
+        w->len = 0;
+        w->failed = 0;
+    }
+    return w;
+}
+
+/* Flushes and frees w: 0, or -1 when any write failed. */
+static int writer_close(writer *w)
+{
+    flush(w);
+    int failed = w->failed || fflush(w->out) != 0;
+    free(w);
+    return failed ? -1 : 0;
+}
+
 int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
                   const unsigned char *graph_sha256)
 {
-    writer *w = malloc(sizeof *w); /* 64 KiB: kept off the stack */
+    writer *w = writer_open(out);
     if (w == NULL)
         return -1;
-    w->out = out;
-    w->len = 0;
-    w->failed = 0;
     put_header(w, graph_sha256);
     if (r->kind == PP_PLANAR)
         put_rotation(w, g, r->rot);
     else
         put_subdivision(w, r);
-    flush(w);
-    int failed = w->failed || fflush(out) != 0;
-    free(w);
-    return failed ? -1 : 0;
+    return writer_close(w);
+}
+
+int pp_write_drawing_cert(FILE *out, const pw_graph *g, const uint32_t *rot, const int64_t *x,
+                          const int64_t *y, const unsigned char *graph_sha256)
+{
+    writer *w = writer_open(out);
+    if (w == NULL)
+        return -1;
+    put_header(w, graph_sha256);
+    put_rotation(w, g, rot);
+    put_points(w, g->n, x, y);
+    return writer_close(w);
 }

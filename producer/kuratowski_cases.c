@@ -119,83 +119,65 @@ int pp_build_minor_b(pp_face *f, pp_witness *w, uint32_t i, pp_result *res)
     return pp_wit_emit(w, PP_K33, branch, res);
 }
 
-/* The pocket reaches above x (left) : t_a is on the rim between r and x. */
-static int high_left(pp_face *f, pp_witness *w, const pp_pocket *p, pp_result *res)
+/*
+ * One side of the face for the mirror-image cases: the pocket's touch point
+ * on it (rim position t, inner position q), that side's x or y (rim position
+ * xy) with its way up, and whether the rim reaches r from it on the right.
+ */
+typedef struct {
+    uint32_t t, q, xy;
+    pp_conn up;
+    int right;
+} face_side;
+
+/*
+ * The pocket reaches above the near side's x or y: its near touch point t_n
+ * is on the rim between r and that vertex; t_f is the far touch point.
+ */
+static int high_attachment(pp_face *f, pp_witness *w, const pp_pocket *p, face_side *near,
+                           face_side *far, pp_result *res)
 {
-    pp_conn cx = way_up(f, w, f->px), cy = way_up(f, w, f->py);
     uint32_t *pc = f->k->pc;
-    if (p->pb >= f->py) { /* {t_a, w, U} x {x, r, y} */
+    int far_beyond = near->right ? far->t <= far->xy : far->t >= far->xy;
+    if (far_beyond) { /* {t_n, w, U} x {near, r, far} */
         pp_conn cv = pp_conn_make(w, PP_CONN_V, f->v, 0, NULL, 0, 0);
-        uint32_t hub = pp_median3(cx.u, cy.u, f->v);
-        uint32_t branch[6] = {pc[p->pa], pc[p->i], hub, pc[f->px], f->r, pc[f->py]};
-        path_rim(f, w, p->pa, f->px);
-        path_to_r(f, w, p->pa, 0);
+        uint32_t hub = pp_median3(near->up.u, far->up.u, f->v);
+        uint32_t branch[6] = {pc[near->t], pc[p->i], hub, pc[near->xy], f->r, pc[far->xy]};
+        path_rim(f, w, near->t, near->xy);
+        path_to_r(f, w, near->t, near->right);
         pp_wit_begin(w);
-        inner(f, w, p->qa, p->qb);
-        rim(f, w, p->pb, f->py);
+        inner(f, w, near->q, far->q);
+        rim(f, w, far->t, far->xy);
         pp_wit_end(w);
-        path_rim(f, w, p->i, f->px);
+        path_rim(f, w, p->i, near->xy);
         path_pert(w, pc[p->i]);
-        path_rim(f, w, p->i, f->py);
-        pp_wit_path_to_hub(w, &cx, hub);
+        path_rim(f, w, p->i, far->xy);
+        pp_wit_path_to_hub(w, &near->up, hub);
         pp_wit_path_to_hub(w, &cv, hub);
-        pp_wit_path_to_hub(w, &cy, hub);
+        pp_wit_path_to_hub(w, &far->up, hub);
         return pp_wit_emit(w, PP_K33, branch, res);
     }
-    /* t_b inside the lower path: {r, x, t_b} x {t_a, w, y} */
-    uint32_t branch[6] = {f->r, pc[f->px], pc[p->pb], pc[p->pa], pc[p->i], pc[f->py]};
-    path_to_r(f, w, p->pa, 0);
+    /* t_f inside the lower path: {r, near, t_f} x {t_n, w, far} */
+    uint32_t branch[6] = {f->r, pc[near->xy], pc[far->t], pc[near->t], pc[p->i], pc[far->xy]};
+    path_to_r(f, w, near->t, near->right);
     path_pert(w, pc[p->i]);
-    path_to_r(f, w, f->py, 1);
-    path_rim(f, w, f->px, p->pa);
-    path_rim(f, w, f->px, p->i);
-    pp_wit_path_over(w, &cx, &cy);
-    path_inner(f, w, p->qb, p->qa);
-    path_rim(f, w, p->pb, p->i);
-    path_rim(f, w, p->pb, f->py);
+    path_to_r(f, w, far->xy, far->right);
+    path_rim(f, w, near->xy, near->t);
+    path_rim(f, w, near->xy, p->i);
+    pp_wit_path_over(w, &near->up, &far->up);
+    path_inner(f, w, far->q, near->q);
+    path_rim(f, w, far->t, p->i);
+    path_rim(f, w, far->t, far->xy);
     return pp_wit_emit(w, PP_K33, branch, res);
 }
 
-/* Mirror image of high_left: t_b is on the rim between y and r. */
-static int high_right(pp_face *f, pp_witness *w, const pp_pocket *p, pp_result *res)
-{
-    pp_conn cx = way_up(f, w, f->px), cy = way_up(f, w, f->py);
-    uint32_t *pc = f->k->pc;
-    if (p->pa <= f->px) { /* {t_b, w, U} x {y, r, x} */
-        pp_conn cv = pp_conn_make(w, PP_CONN_V, f->v, 0, NULL, 0, 0);
-        uint32_t hub = pp_median3(cx.u, cy.u, f->v);
-        uint32_t branch[6] = {pc[p->pb], pc[p->i], hub, pc[f->py], f->r, pc[f->px]};
-        path_rim(f, w, p->pb, f->py);
-        path_to_r(f, w, p->pb, 1);
-        pp_wit_begin(w);
-        inner(f, w, p->qb, p->qa);
-        rim(f, w, p->pa, f->px);
-        pp_wit_end(w);
-        path_rim(f, w, p->i, f->py);
-        path_pert(w, pc[p->i]);
-        path_rim(f, w, p->i, f->px);
-        pp_wit_path_to_hub(w, &cy, hub);
-        pp_wit_path_to_hub(w, &cv, hub);
-        pp_wit_path_to_hub(w, &cx, hub);
-        return pp_wit_emit(w, PP_K33, branch, res);
-    }
-    /* t_a inside the lower path: {r, y, t_a} x {t_b, w, x} */
-    uint32_t branch[6] = {f->r, pc[f->py], pc[p->pa], pc[p->pb], pc[p->i], pc[f->px]};
-    path_to_r(f, w, p->pb, 1);
-    path_pert(w, pc[p->i]);
-    path_to_r(f, w, f->px, 0);
-    path_rim(f, w, f->py, p->pb);
-    path_rim(f, w, f->py, p->i);
-    pp_wit_path_over(w, &cy, &cx);
-    path_inner(f, w, p->qa, p->qb);
-    path_rim(f, w, p->pa, p->i);
-    path_rim(f, w, p->pa, f->px);
-    return pp_wit_emit(w, PP_K33, branch, res);
-}
-
+/* t_a on the rim between r and x: x's side is the near one; else y's, the mirror image. */
 int pp_build_high_attachment(pp_face *f, pp_witness *w, const pp_pocket *p, pp_result *res)
 {
-    return p->pa < f->px ? high_left(f, w, p, res) : high_right(f, w, p, res);
+    pp_conn cx = way_up(f, w, f->px), cy = way_up(f, w, f->py);
+    face_side left = {p->pa, p->qa, f->px, cx, 0}, right = {p->pb, p->qb, f->py, cy, 1};
+    return p->pa < f->px ? high_attachment(f, w, p, &left, &right, res)
+                         : high_attachment(f, w, p, &right, &left, res);
 }
 
 /* r reaches z inside the pocket's inner side: {t_a, t_b, r} x {z, w, U}. */

@@ -6,14 +6,8 @@
 # Usage: tests/check_batch.sh BUILD_DIR
 set -u
 bin=$(cd "$(dirname "${1:-build}/planewit")" && pwd)/planewit
-tmp=$(mktemp -d)
-trap 'rm -rf "$tmp"' EXIT
-pass=0
-fail=0
-ok() { pass=$((pass + 1)); }
-bad() { echo "FAIL $1"; [ -f "$tmp/err" ] && sed 's/^/    /' "$tmp/err" | head -n 5; fail=$((fail + 1)); }
-status_is() { if [ "$2" -eq "$3" ]; then ok; else bad "$1: exit $2, expected $3"; fi; }
-has() { if grep -qF -- "$3" "$2"; then ok; else bad "$1: $2 lacks '$3'"; fi; }
+. "$(dirname "$0")/expect.sh"
+evidence="$tmp/err"
 # field LINE_NO KEY FILE: the raw value of "KEY": in line LINE_NO of FILE
 field() { sed -n "${1}p" "$3" | sed -n "s/.*\"$2\":\(\"[^\"]*\"\|[a-z0-9]*\).*/\1/p"; }
 
@@ -121,20 +115,7 @@ status_is empty-shard $? 0
 
 # A long run (20 grid graphs of ~10^6 edges, one thread): plain progress lines when stderr is
 # not a terminal, none with --quiet; Ctrl-C leaves the old output whole and no temporary file.
-awk -v R=700 -v C=700 -v G="$tmp/set/grid.graph" -v K="$tmp/set/grid.cert" '
-BEGIN {
-  print "graph", R * C, R * (C - 1) + (R - 1) * C > G
-  print "certificate 1\nclaim planar" > K
-  for (r = 0; r < R; r++) for (c = 0; c < C; c++) {
-    v = r * C + c; s = "around " v " :"
-    if (c + 1 < C) { print v, v + 1 > G; s = s " " (v + 1) }
-    if (r + 1 < R) print v, v + C > G
-    if (r > 0) s = s " " (v - C)
-    if (c > 0) s = s " " (v - 1)
-    if (r + 1 < R) s = s " " (v + C)
-    print s > K
-  }
-}'
+awk -v R=700 -v C=700 -v G="$tmp/set/grid.graph" -v K="$tmp/set/grid.cert" -f "$(dirname "$0")/grid_pair.awk"
 : >"$tmp/set/long.list"
 for i in $(seq 20); do echo 'grid.graph grid.cert planar' >>"$tmp/set/long.list"; done
 echo 'previous contents' >"$tmp/long.jsonl"
@@ -154,5 +135,4 @@ status_is quiet $? 0
 grep -q 'jobs done' "$tmp/err" && bad "--quiet printed progress" || ok
 has quiet-summary "$tmp/err" "result: all 3 jobs accepted"
 
-echo "batch: $pass passed, $fail failed"
-[ "$fail" -eq 0 ]
+finish batch

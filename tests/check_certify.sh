@@ -5,7 +5,7 @@
 # Usage: tests/check_certify.sh BUILD_DIR
 set -u
 bin=${1:-build}/planewit
-. tests/expect.sh
+. "$(dirname "$0")/expect.sh"
 
 # K5 and K3,3 (Kuratowski 1930: non-planar), K4 (planar: common practice),
 # K3,4 (bipartite, 12 > 2*7 - 4 = 10 edges), K6 (15 > 3*6 - 6 = 12 edges); the

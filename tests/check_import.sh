@@ -6,7 +6,7 @@
 # Usage: tests/check_import.sh BUILD_DIR
 set -u
 bin=${1:-build}/planewit
-. tests/expect.sh
+. "$(dirname "$0")/expect.sh"
 
 # same_edges NAME GRAPH EXPECTED: the graph file's edge set (unordered pairs) equals EXPECTED's
 # lines "U V" (any order); the header's N must be the given N.

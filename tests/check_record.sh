@@ -5,14 +5,7 @@
 # Usage: tests/check_record.sh BUILD_DIR
 set -u
 bin=${1:-build}/planewit
-tmp=$(mktemp -d)
-trap 'rm -rf "$tmp"' EXIT
-pass=0
-fail=0
-ok() { pass=$((pass + 1)); }
-bad() { echo "FAIL $1"; fail=$((fail + 1)); }
-# has NAME FILE TEXT: FILE contains TEXT literally
-has() { if grep -qF -- "$3" "$2"; then ok; else bad "$1: lacks '$3'"; sed 's/^/    /' "$2"; fi; }
+. "$(dirname "$0")/expect.sh"
 
 # The normal form computed without planewit (sed, awk, sort, sha256sum).
 normal_form_sha() {
@@ -32,8 +25,7 @@ printf 'graph 4 5\n0 1\n1 2\n2 3\n3 0\n1 3\n' >"$tmp/c.graph"
 cert='certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 2 0\naround 2 : 3 0 1\naround 3 : 0 2\n'
 printf "$cert" >"$tmp/a.cert"
 
-"$bin" check "$tmp/a.graph" "$tmp/a.cert" --record "$tmp/a.json" --note 'rev C, "single" layer' >"$tmp/out" 2>&1
-[ $? -eq 0 ] && ok || bad "accepted record: exit status"
+run accepted-record 0 "$bin" check "$tmp/a.graph" "$tmp/a.cert" --record "$tmp/a.json" --note 'rev C, "single" layer'
 has record-kind "$tmp/a.json" '"record": "planewit-signoff"'
 has record-note "$tmp/a.json" '"note": "rev C, \"single\" layer"'
 has record-verdict "$tmp/a.json" '"verdict":"accepted"'
@@ -57,31 +49,25 @@ canon_a=$(tr ',{}' '\n\n\n' <"$tmp/a.json" | sed -n 's/^ *"sha256": "\([0-9a-f]*
 canon_b=$(tr ',{}' '\n\n\n' <"$tmp/b.json" | sed -n 's/^ *"sha256": "\([0-9a-f]*\)".*/\1/p')
 [ "$canon_b" = "$canon_a" ] && ok || bad "same graph in another layout: canonical digest $canon_b, expected $canon_a"
 [ "$(normal_form_sha "$tmp/b.graph")" = "$canon_a" ] && ok || bad "shell pipeline disagrees on the other layout"
-"$bin" check "$tmp/c.graph" "$tmp/a.cert" --record "$tmp/c.json" >/dev/null 2>&1
-[ $? -eq 1 ] && ok || bad "rejected record: exit status"
+run rejected-record 1 "$bin" check "$tmp/c.graph" "$tmp/a.cert" --record "$tmp/c.json"
 has rejected-record "$tmp/c.json" '"verdict":"rejected"'
 canon_c=$(tr ',{}' '\n\n\n' <"$tmp/c.json" | sed -n 's/^ *"sha256": "\([0-9a-f]*\)".*/\1/p')
 [ -n "$canon_c" ] && [ "$canon_c" != "$canon_a" ] && ok || bad "another graph has the same canonical digest"
 
 # An unusable graph: the record says so and has no canonical digest.
 printf 'graph 3 2\n0 1\n1 1\n' >"$tmp/loop.graph"
-"$bin" check "$tmp/loop.graph" "$tmp/a.cert" --record "$tmp/loop.json" >/dev/null 2>&1
-[ $? -eq 2 ] && ok || bad "unusable record: exit status"
+run unusable-record 2 "$bin" check "$tmp/loop.graph" "$tmp/a.cert" --record "$tmp/loop.json"
 has unusable-canonical "$tmp/loop.json" '"sha256": null}'
 
 # Usage errors, and a record that cannot be written leaves nothing behind.
-"$bin" check "$tmp/a.graph" "$tmp/a.cert" --note x >"$tmp/out" 2>&1
-[ $? -eq 2 ] && ok || bad "--note without --record: exit status"
+run note-alone 2 "$bin" check "$tmp/a.graph" "$tmp/a.cert" --note x
 has note-alone "$tmp/out" "give --record FILE"
-"$bin" check "$tmp/a.graph" "$tmp/a.cert" --record >"$tmp/out" 2>&1
-[ $? -eq 2 ] && ok || bad "--record without value: exit status"
-"$bin" check "$tmp/a.graph" "$tmp/a.cert" --record "$tmp/no/such/dir/r.json" >"$tmp/out" 2>&1
-[ $? -eq 2 ] && ok || bad "unwritable record: exit status"
+run record-no-value 2 "$bin" check "$tmp/a.graph" "$tmp/a.cert" --record
+run unwritable 2 "$bin" check "$tmp/a.graph" "$tmp/a.cert" --record "$tmp/no/such/dir/r.json"
 has unwritable "$tmp/out" "not written"
 # Overwriting keeps a whole file: the new record replaces the old one, no temporary is left.
 "$bin" check "$tmp/c.graph" "$tmp/a.cert" --record "$tmp/a.json" >/dev/null 2>&1
 has overwritten "$tmp/a.json" '"verdict":"rejected"'
 [ -z "$(ls "$tmp" | grep '\.tmp-')" ] && ok || bad "a temporary file was left behind"
 
-echo "record: $pass passed, $fail failed"
-[ "$fail" -eq 0 ]
+finish record

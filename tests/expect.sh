@@ -1,14 +1,40 @@
-# expect.sh - shared by the end-to-end scripts tests/check_import.sh and
-# tests/check_certify.sh (sourced, not run): a temporary folder, pass/fail
-# counting, and expect(), which runs a command and checks its exit status and
-# a substring of its output.  The sourcing script sets $bin first.
+# expect.sh - shared by the end-to-end scripts tests/check_*.sh (sourced, not
+# run): a temporary folder, pass/fail counting, and checks of a command's exit
+# status and output.  The sourcing script sets $bin first; it may set
+# $evidence to a file (say the last command's stderr) that every failure shows.
 tmp=$(mktemp -d)
 trap 'rm -rf "$tmp"' EXIT
 pass=0
 fail=0
 
 ok() { pass=$((pass + 1)); }
-bad() { echo "FAIL $*"; fail=$((fail + 1)); }
+# show FILE: the file, indented under a FAIL line.
+show() { sed 's/^/    /' "$1"; }
+bad() {
+    echo "FAIL $*"
+    [ -n "${evidence-}" ] && [ -f "$evidence" ] && show "$evidence" | head -n 8
+    fail=$((fail + 1))
+}
+
+# status_is NAME GOT WANT: an exit status already collected.
+status_is() { if [ "$2" -eq "$3" ]; then ok; else bad "$1: exit $2, expected $3"; fi; }
+
+# has NAME FILE TEXT: FILE contains TEXT literally.
+has() {
+    if grep -qF -- "$3" "$2"; then ok; return; fi
+    bad "$1: $2 lacks '$3'"
+    [ "$2" = "${evidence-}" ] || show "$2"
+}
+
+# run NAME EXIT COMMAND...: exit status only; stdout+stderr are left in $tmp/out.
+run() {
+    name=$1 want=$2
+    shift 2
+    "$@" >"$tmp/out" 2>&1
+    got=$?
+    if [ "$got" -eq "$want" ]; then ok; else
+        bad "$name: exit $got, expected $want"; show "$tmp/out"; fi
+}
 
 # expect NAME EXIT TEXT COMMAND...: exit status and a substring of stdout+stderr.
 expect() {
@@ -17,9 +43,9 @@ expect() {
     "$@" >"$tmp/out" 2>&1
     got=$?
     if [ "$got" -ne "$want" ]; then
-        bad "$name: exit $got, expected $want"; sed 's/^/    /' "$tmp/out"
+        bad "$name: exit $got, expected $want"; show "$tmp/out"
     elif ! grep -qF -- "$text" "$tmp/out"; then
-        bad "$name: output lacks '$text'"; sed 's/^/    /' "$tmp/out"
+        bad "$name: output lacks '$text'"; show "$tmp/out"
     else
         ok
     fi

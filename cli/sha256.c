@@ -1,7 +1,8 @@
 /*
- * sha256_file.c - SHA-256 of a whole file, streamed through OpenSSL's EVP
- * interface so that large files (and the running executable) are never held
- * in memory at once.
+ * sha256.c - SHA-256 through OpenSSL's EVP interface: of bytes already in
+ * memory (graph-sha256 lines, names files), and of a whole file, streamed so
+ * that large files (and the running executable) are never held in memory at
+ * once; and a digest's hex form.
  */
 #include "cli.h"
 
@@ -9,6 +10,12 @@
 #include <string.h>
 
 #include <openssl/evp.h>
+
+int cli_sha256(const char *bytes, size_t len, unsigned char out[32])
+{
+    unsigned int size = 0;
+    return EVP_Digest(bytes, len, out, &size, EVP_sha256(), NULL) == 1 && size == 32 ? 0 : -1;
+}
 
 int cli_sha256_stream(FILE *f, unsigned char out[32])
 {
