@@ -1,0 +1,127 @@
+/*
+ * certify_phases.c - the steps `planewit certify GRAPH -o CERT` takes, timed
+ * one by one in a single process, for the certify benchmark (issue 3): read
+ * the file, SHA-256 of its bytes, parse (pw_graph_parse), the planarity
+ * algorithm with witness finding (pp_certify), rendering the certificate text
+ * into memory (pp_write_cert), the kernel's self-check (pw_check_parsed), and
+ * writing the text to CERT.  It calls the same library functions in the same
+ * order as cli/cmd_certify.c and cli/prover.c, without the front end's report.
+ *
+ * Usage: certify_phases GRAPH CERT -> one line of key=value pairs (seconds),
+ * with the witness kind and, for a subdivision, its distinct vertices and
+ * edges, and whether it is bare (every path vertex but the branches used once).
+ */
+#include "certify.h"
+#include "planewit.h"
+
+#include <openssl/evp.h>
+#include <stdlib.h>
+#include <string.h>
+#include <time.h>
+
+static double now(void)
+{
+    struct timespec t;
+    clock_gettime(CLOCK_MONOTONIC, &t);
+    return (double)t.tv_sec + (double)t.tv_nsec * 1e-9;
+}
+
+static void fail(const char *what)
+{
+    fprintf(stderr, "certify_phases: %s\n", what);
+    exit(2);
+}
+
+static char *slurp(const char *path, size_t *len)
+{
+    FILE *f = fopen(path, "rb");
+    char *buf = NULL;
+    if (f == NULL || pw_read_all(f, UINT64_MAX, &buf, len) != PW_OK)
+        fail("cannot read the graph");
+    fclose(f);
+    return buf;
+}
+
+static const char *kind_name(pp_kind kind)
+{
+    return kind == PP_PLANAR ? "planar" : kind == PP_K5 ? "k5" : "k33";
+}
+
+/* Distinct vertices and edges of the witness paths; bare when no inner vertex repeats. */
+static void witness_size(const pw_graph *g, const pp_result *r, unsigned long *vertices,
+                         unsigned long *edges, int *bare)
+{
+    unsigned paths = pp_path_count(r);
+    unsigned char *uses = calloc((size_t)g->n + 1, 1);
+    if (uses == NULL)
+        fail("out of memory");
+    *vertices = 0;
+    *edges = 0;
+    *bare = 1;
+    for (unsigned k = 0; k < paths; k++) {
+        *edges += r->path_start[k + 1] - r->path_start[k] - 1;
+        for (uint32_t i = r->path_start[k]; i < r->path_start[k + 1]; i++) {
+            uint32_t x = r->path[i];
+            int inner = i != r->path_start[k] && i + 1 != r->path_start[k + 1];
+            if (uses[x] == 0)
+                ++*vertices;
+            if (inner && uses[x] != 0)
+                *bare = 0;
+            uses[x] = (unsigned char)(inner ? 2 : uses[x] == 2 ? 2 : 1);
+        }
+    }
+    free(uses);
+}
+
+int main(int argc, char **argv)
+{
+    size_t glen, cap = 0;
+    unsigned char sha[32];
+    pw_limits lim;
+    pw_graph g;
+    pw_verdict v;
+    pp_result r;
+    char *cert = NULL;
+    if (argc != 3)
+        fail("usage: certify_phases GRAPH CERT");
+    pw_limits_default(&lim);
+    double t0 = now();
+    char *graph = slurp(argv[1], &glen);
+    double t1 = now();
+    if (EVP_Digest(graph, glen, sha, NULL, EVP_sha256(), NULL) != 1)
+        fail("SHA-256 failed");
+    double t2 = now();
+    if (pw_graph_parse(graph, glen, &lim, &g, &v) != PW_OK)
+        fail("the graph does not parse");
+    double t3 = now();
+    memset(&r, 0, sizeof r);
+    if (pp_certify(&g, &r) != 0)
+        fail("pp_certify failed");
+    double t4 = now();
+    FILE *mem = open_memstream(&cert, &cap);
+    if (mem == NULL || pp_write_cert(mem, &g, &r, sha) != 0 || fflush(mem) != 0)
+        fail("cannot render the certificate");
+    size_t clen = (size_t)ftell(mem);
+    double t5 = now();
+    pw_check_parsed(&g, graph, glen, cert, clen, &v);
+    double t6 = now();
+    FILE *out = fopen(argv[2], "wb");
+    if (out == NULL || fwrite(cert, 1, clen, out) != clen || fclose(out) != 0)
+        fail("cannot write the certificate");
+    double t7 = now();
+    unsigned long wv = 0, we = 0;
+    int bare = 1;
+    if (r.kind != PP_PLANAR)
+        witness_size(&g, &r, &wv, &we, &bare);
+    printf("n=%u m=%u read=%.4f hash=%.4f parse=%.4f algorithm=%.4f text=%.4f selfcheck=%.4f "
+           "file=%.4f kind=%s wv=%lu we=%lu bare=%s verdict=%s\n",
+           g.n, g.m, t1 - t0, t2 - t1, t3 - t2, t4 - t3, t5 - t4, t6 - t5, t7 - t6,
+           kind_name(r.kind), wv, we, bare ? "yes" : "no",
+           v.status == PW_ACCEPTED ? "accepted" : pw_code_name(v.code));
+    fclose(mem);
+    free(cert);
+    pp_result_free(&r);
+    pw_graph_free(&g);
+    free(graph);
+    return v.status == PW_ACCEPTED ? 0 : 1;
+}
