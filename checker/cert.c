@@ -338,9 +338,9 @@ static int parse_nonplanar_body(parser *p)
     int got;
     const char *keyword = body_keyword(p->c->witness);
     while ((got = lex_next_line(&p->lx)) == 1) {
-        char expected[32];
         lex_take(&p->lx, &t);
         if (keyword == NULL || !lex_is(&t, keyword)) {
+            char expected[32];
             if (keyword == NULL)
                 snprintf(expected, sizeof expected, "end of file");
             else

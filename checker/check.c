@@ -7,6 +7,7 @@
  */
 #include "internal.h"
 
+#include <assert.h>
 #include <openssl/evp.h>
 #include <pthread.h>
 #include <stdlib.h>
@@ -101,7 +102,10 @@ pw_status pw_check_parsed(const pw_graph *g, const char *graph, size_t graph_len
     v->have_counts = 1;
     if (digests(graph, graph_len, cert, cert_len, v) != 0)
         return v->status;
-    check_certificate(g, graph, graph_len, cert, cert_len, &c, v);
+    int failed = check_certificate(g, graph, graph_len, cert, cert_len, &c, v);
+    /* Every failing path records its reason: a bare -1 would leave "accepted" standing. */
+    assert((failed != 0) == (v->status != PW_ACCEPTED));
+    (void)failed;
     pw_cert_free(&c);
     return v->status;
 }

@@ -29,11 +29,6 @@ int pw_orientation(pw_xy a, pw_xy b, pw_xy c)
     return pw_cross_sign(u, w);
 }
 
-int pw_xy_less(pw_xy a, pw_xy b)
-{
-    return a.x < b.x || (a.x == b.x && a.y < b.y);
-}
-
 typedef struct {
     const pw_graph *g;
     const pw_cert *c;

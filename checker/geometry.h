@@ -18,8 +18,6 @@ typedef struct {
 int pw_orientation(pw_xy a, pw_xy b, pw_xy c);
 /* Sign of the cross product of directions u and v. */
 int pw_cross_sign(pw_xy u, pw_xy v);
-/* Lexicographic order (x, then y): the order in which the sweep meets points. */
-int pw_xy_less(pw_xy a, pw_xy b);
 
 /*
  * The sweep (sweep.c): no two edges meet except at a common endpoint and no

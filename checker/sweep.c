@@ -239,15 +239,6 @@ static int test_if_both(sweep *s, uint32_t a, uint32_t b)
     return a != PW_NONE && b != PW_NONE ? test_pair(s, a, b) : 0;
 }
 
-/* The lowest (above = 0) or highest (above = 1) edge of the whole status. */
-static uint32_t extreme(const sweep *s, int above)
-{
-    uint32_t e = s->root;
-    while (e != PW_NONE && (above ? s->right[e] : s->left[e]) != PW_NONE)
-        e = above ? s->right[e] : s->left[e];
-    return e;
-}
-
 static int visit(sweep *s, uint32_t x)
 {
     const pw_graph *g = s->g;
@@ -267,11 +258,10 @@ static int visit(sweep *s, uint32_t x)
     }
     if (inserted == 0)
         return test_if_both(s, below, above);
-    uint32_t lowest = below == PW_NONE ? extreme(s, 0) : neighbour(s, below, 1);
-    uint32_t highest = above == PW_NONE ? extreme(s, 1) : neighbour(s, above, 0);
-    if (test_if_both(s, below, lowest) != 0)
+    /* The new edges sit together between below and above: test the two ends of that block. */
+    if (below != PW_NONE && test_pair(s, below, neighbour(s, below, 1)) != 0)
         return -1;
-    return test_if_both(s, highest, above);
+    return above != PW_NONE ? test_pair(s, neighbour(s, above, 0), above) : 0;
 }
 
 int pw_sweep(const pw_graph *g, const pw_xy *at, const uint32_t *order, const uint32_t *rank,

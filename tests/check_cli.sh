@@ -54,7 +54,12 @@ expect bound-cert-other-bytes 1 "[graph-hash-mismatch]" "$bin" check "$tmp/tri2.
 # A header claiming 2,000,000,000 vertices with nothing behind it stays within 64 MB.
 printf 'graph 2000000000 0\n' >"$tmp/huge.graph"
 printf 'certificate 1\nclaim planar\naround 0 :\n' >"$tmp/huge.cert"
-expect huge-header 1 "[around-count]" sh -c "ulimit -v 65536; \"$bin\" check \"$tmp/huge.graph\" \"$tmp/huge.cert\" --max-vertices 2147483647"
+# (AddressSanitizer reserves terabytes of address space, so a sanitized build skips this case.)
+if grep -q AddressSanitizer "$bin" 2>/dev/null; then
+    echo "skip huge-header: sanitized build"
+else
+    expect huge-header 1 "[around-count]" sh -c "ulimit -v 65536; \"$bin\" check \"$tmp/huge.graph\" \"$tmp/huge.cert\" --max-vertices 2147483647"
+fi
 
 # Same case, two paths: the verdict record is the same from a file and from standard input.
 "$bin" check "$tmp/tri.graph" "$tmp/bad.cert" --json | sed 's/"path":"[^"]*"//g' >"$tmp/a.json"
@@ -84,9 +89,10 @@ if grep -q '\[euler\]' "$tmp/out" && grep -qx 'names: 0 = a' "$tmp/out"; then pa
 # Output to a pipe or device is written through it, never replaced by a file (a rename over
 # /dev/null once turned it into a regular file).
 mkfifo "$tmp/pipe"
-cat "$tmp/pipe" >"$tmp/piped" &
+timeout 30 cat "$tmp/pipe" >"$tmp/piped" &
 reader=$!
-"$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --record "$tmp/pipe" >/dev/null 2>&1
+# A binary that never opens the pipe must not hang the suite: both sides are timed out.
+timeout 30 "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --record "$tmp/pipe" >/dev/null 2>&1
 wait "$reader"
 if [ -p "$tmp/pipe" ] && grep -q '"verdict":"accepted"' "$tmp/piped"; then
     ok
