@@ -311,11 +311,12 @@ static void caption(FILE *out, const pw_graph *g, const svg_witness *w, const pl
     svg_caption(out, 30, y + 78, "caption",
                 "A second layer or a jumper for either path removes this obstruction "
                 "(others may remain).");
+    unsigned hidden_vertices = g->n - pl->count;
+    unsigned long long hidden_edges = g->m - (w->path_start[path_count(w)] - path_count(w)) - faded;
     snprintf(line, sizeof line,
-             "Not shown: %u other vertices and %llu other edges; %llu edges among these vertices "
-             "faded.", g->n - pl->count,
-             (unsigned long long)(g->m - (w->path_start[path_count(w)] - path_count(w)) - faded),
-             (unsigned long long)faded);
+             "Not shown: %u other vert%s and %llu other edge%s; %llu edge%s among these vertices "
+             "faded.", hidden_vertices, hidden_vertices == 1 ? "ex" : "ices", hidden_edges,
+             hidden_edges == 1 ? "" : "s", (unsigned long long)faded, faded == 1 ? "" : "s");
     svg_caption(out, 30, y + 104, "caption", line);
 }
 
