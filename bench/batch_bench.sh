@@ -89,7 +89,7 @@ with an edge-bound certificate), listed over and over to $jobs jobs. Warm page c
 Target: at least 20,000 jobs per second per core; measured with \`-j 1\`: $r1 ($(awk -v r="$r1" 'BEGIN { print (r >= 20000 ? "met" : "NOT met") }')).
 The outputs of \`-j 1\` and \`-j $cores\` are byte-identical (checked by the script).
 Stall check: the last row against the larger of the big job alone and the small jobs
-alone ($(awk -v a="$tb" -v b="$t1" 'BEGIN { printf "%.2f", a > b ? a : b }') s: no stall at all) and against their sum
+alone ($(awk -v a="$tb" -v b="$t1" 'BEGIN { printf "%.2f", (a > b ? a : b) }') s: no stall at all) and against their sum
 ($(awk -v a="$tb" -v b="$t1" 'BEGIN { printf "%.2f", a + b }') s: the big job holds everything up).
 REPORT
 cat "$results"
