@@ -12,6 +12,20 @@
 #include <stdlib.h>
 #include <string.h>
 
+oracle_result oracle_verdict(oracle_status status, const char *why)
+{
+    oracle_result r = {status, why};
+    return r;
+}
+
+void *oracle_zeroed(size_t count, size_t size)
+{
+    void *p = calloc(count + 1, size);
+    if (p == NULL)
+        abort();
+    return p;
+}
+
 /* ---- the graph file ------------------------------------------------------ */
 
 static int read_graph(ograph *g, const otext *t, uint32_t max_n, uint32_t max_m)

@@ -10,20 +10,6 @@
 
 #include <stdlib.h>
 
-static oracle_result verdict(oracle_status status, const char *why)
-{
-    oracle_result r = {status, why};
-    return r;
-}
-
-static void *zeroed(size_t count, size_t size)
-{
-    void *p = calloc(count + 1, size);
-    if (p == NULL)
-        abort();
-    return p;
-}
-
 /* The around lists as draw_oracle's rotation (they passed the rotation rules). */
 static void rotation_of(const ograph *g, const ocert *c, uint32_t *first, uint32_t *nbr)
 {
@@ -39,15 +25,15 @@ static void rotation_of(const ograph *g, const ocert *c, uint32_t *first, uint32
 oracle_result oracle_drawing(const ograph *g, const ocert *c)
 {
     if (c->n_points != g->n)
-        return verdict(ORACLE_REJECTED, "not one point per vertex");
-    int64_t *x = zeroed(g->n, sizeof *x), *y = zeroed(g->n, sizeof *y);
-    unsigned char *placed = zeroed(g->n, 1);
-    uint32_t *first = zeroed(g->n + 1, sizeof *first), *nbr = zeroed(2 * (size_t)g->m, sizeof *nbr);
-    oracle_result r = verdict(ORACLE_ACCEPTED, "plane straight-line drawing");
+        return oracle_verdict(ORACLE_REJECTED, "not one point per vertex");
+    int64_t *x = oracle_zeroed(g->n, sizeof *x), *y = oracle_zeroed(g->n, sizeof *y);
+    unsigned char *placed = oracle_zeroed(g->n, 1);
+    uint32_t *first = oracle_zeroed(g->n + 1, sizeof *first), *nbr = oracle_zeroed(2 * (size_t)g->m, sizeof *nbr);
+    oracle_result r = oracle_verdict(ORACLE_ACCEPTED, "plane straight-line drawing");
     for (size_t i = 0; i < c->n_points && r.status == ORACLE_ACCEPTED; i++) {
         const opoint *p = &c->points[i];
         if (placed[p->v])
-            r = verdict(ORACLE_REJECTED, "a vertex placed twice");
+            r = oracle_verdict(ORACLE_REJECTED, "a vertex placed twice");
         placed[p->v] = 1;
         x[p->v] = p->x;
         y[p->v] = p->y;
@@ -55,7 +41,7 @@ oracle_result oracle_drawing(const ograph *g, const ocert *c)
     if (r.status == ORACLE_ACCEPTED) {
         rotation_of(g, c, first, nbr);
         if (oracle_check(g->n, g->m, g->ends, first, nbr, x, y) != ORACLE_OK)
-            r = verdict(ORACLE_REJECTED, "not a plane drawing with these angular orders");
+            r = oracle_verdict(ORACLE_REJECTED, "not a plane drawing with these angular orders");
     }
     free(x);
     free(y);

@@ -47,4 +47,8 @@ oracle_result oracle_bounds(const ograph *g, const ocert *c);
 /* The drawing given by point lines, after the rotation rules passed. */
 oracle_result oracle_drawing(const ograph *g, const ocert *c);
 
+/* A verdict with its reason; zero-filled room for count + 1 items (aborts when none). */
+oracle_result oracle_verdict(oracle_status status, const char *why);
+void *oracle_zeroed(size_t count, size_t size);
+
 #endif

@@ -7,20 +7,6 @@
 #include <stdlib.h>
 #include <string.h>
 
-static oracle_result verdict(oracle_status status, const char *why)
-{
-    oracle_result r = {status, why};
-    return r;
-}
-
-static void *zeroed(size_t count, size_t size)
-{
-    void *p = calloc(count + 1, size);
-    if (p == NULL)
-        abort();
-    return p;
-}
-
 static uint32_t degree(const ograph *g, uint32_t v)
 {
     uint32_t d = 0;
@@ -32,7 +18,7 @@ static uint32_t degree(const ograph *g, uint32_t v)
 /* Component label of every vertex (the smallest vertex of its component). */
 static uint32_t *components(const ograph *g)
 {
-    uint32_t *label = zeroed(g->n, sizeof *label);
+    uint32_t *label = oracle_zeroed(g->n, sizeof *label);
     for (uint32_t v = 0; v < g->n; v++)
         label[v] = v;
     for (int changed = 1; changed;) {
@@ -52,7 +38,7 @@ static uint32_t *components(const ograph *g)
 /* succ[w * n + u]: the neighbour after u in w's list. */
 static int rotation_lists(const ograph *g, const ocert *c, uint32_t *succ)
 {
-    unsigned char *has_line = zeroed(g->n, 1);
+    unsigned char *has_line = oracle_zeroed(g->n, 1);
     int ok = c->n_lines == g->n;
     for (size_t i = 0; ok && i < c->n_lines; i++) {
         const oline *l = &c->lines[i];
@@ -72,12 +58,12 @@ static int rotation_lists(const ograph *g, const ocert *c, uint32_t *succ)
 oracle_result oracle_rotation(const ograph *g, const ocert *c)
 {
     size_t nn = (size_t)g->n * g->n;
-    uint32_t *succ = zeroed(nn, sizeof *succ), *label = components(g);
-    unsigned char *used = zeroed(nn, 1);
-    int64_t *euler = zeroed(g->n, sizeof *euler); /* V - E + F per component label */
-    oracle_result r = verdict(ORACLE_ACCEPTED, "rotation system");
+    uint32_t *succ = oracle_zeroed(nn, sizeof *succ), *label = components(g);
+    unsigned char *used = oracle_zeroed(nn, 1);
+    int64_t *euler = oracle_zeroed(g->n, sizeof *euler); /* V - E + F per component label */
+    oracle_result r = oracle_verdict(ORACLE_ACCEPTED, "rotation system");
     if (!rotation_lists(g, c, succ)) {
-        r = verdict(ORACLE_REJECTED, "around lines are not one permutation of each neighbourhood");
+        r = oracle_verdict(ORACLE_REJECTED, "around lines are not one permutation of each neighbourhood");
         goto done;
     }
     for (uint32_t v = 0; v < g->n; v++)
@@ -99,7 +85,7 @@ oracle_result oracle_rotation(const ograph *g, const ocert *c)
         }
     for (uint32_t v = 0; v < g->n; v++)
         if (label[v] == v && euler[v] != 2)
-            r = verdict(ORACLE_REJECTED, "a component has V - E + F != 2");
+            r = oracle_verdict(ORACLE_REJECTED, "a component has V - E + F != 2");
     if (r.status == ORACLE_ACCEPTED && c->n_points > 0)
         r = oracle_drawing(g, c);
 done:
@@ -149,13 +135,13 @@ oracle_result oracle_subdivision(const ograph *g, const ocert *c)
     for (int i = 0; i < branches; i++)
         for (int j = 0; j < i; j++)
             if (c->branch[i] == c->branch[j])
-                return verdict(ORACLE_REJECTED, "branch vertices repeat");
+                return oracle_verdict(ORACLE_REJECTED, "branch vertices repeat");
     if (c->n_lines != (k33 ? 9u : 10u))
-        return verdict(ORACLE_REJECTED, "wrong number of paths");
-    unsigned char *inner = zeroed(g->n, 1);
+        return oracle_verdict(ORACLE_REJECTED, "wrong number of paths");
+    unsigned char *inner = oracle_zeroed(g->n, 1);
     int ok = paths_ok(g, c, k33, inner);
     free(inner);
-    return ok ? verdict(ORACLE_ACCEPTED, "subdivision") : verdict(ORACLE_REJECTED, "paths");
+    return ok ? oracle_verdict(ORACLE_ACCEPTED, "subdivision") : oracle_verdict(ORACLE_REJECTED, "paths");
 }
 
 /* ---- minor --------------------------------------------------------------- */
@@ -163,7 +149,7 @@ oracle_result oracle_subdivision(const ograph *g, const ocert *c)
 /* Is set s (owner[v] == s) connected in the subgraph it induces? */
 static int set_connected(const ograph *g, const uint32_t *owner, const oline *l, uint32_t s)
 {
-    unsigned char *reached = zeroed(g->n, 1);
+    unsigned char *reached = oracle_zeroed(g->n, 1);
     reached[l->v[0]] = 1;
     for (int changed = 1; changed;) {
         changed = 0;
@@ -215,13 +201,13 @@ oracle_result oracle_minor(const ograph *g, const ocert *c)
 {
     uint32_t sets = c->kind == K_MINOR_K33 ? 6 : 5;
     if (c->n_lines != sets)
-        return verdict(ORACLE_REJECTED, "wrong number of sets");
-    uint32_t *owner = zeroed(g->n, sizeof *owner);
+        return oracle_verdict(ORACLE_REJECTED, "wrong number of sets");
+    uint32_t *owner = oracle_zeroed(g->n, sizeof *owner);
     for (uint32_t v = 0; v < g->n; v++)
         owner[v] = 6;
     int ok = sets_ok(g, c, sets, owner);
     free(owner);
-    return ok ? verdict(ORACLE_ACCEPTED, "minor") : verdict(ORACLE_REJECTED, "branch sets");
+    return ok ? oracle_verdict(ORACLE_ACCEPTED, "minor") : oracle_verdict(ORACLE_REJECTED, "branch sets");
 }
 
 /* ---- edge bounds --------------------------------------------------------- */
@@ -230,17 +216,17 @@ oracle_result oracle_bounds(const ograph *g, const ocert *c)
 {
     int64_t n = g->n, m = g->m;
     if (c->kind == K_EDGE_BOUND)
-        return n >= 3 && m > 3 * n - 6 ? verdict(ORACLE_ACCEPTED, "edge bound")
-                                        : verdict(ORACLE_REJECTED, "edge bound not met");
+        return n >= 3 && m > 3 * n - 6 ? oracle_verdict(ORACLE_ACCEPTED, "edge bound")
+                                        : oracle_verdict(ORACLE_REJECTED, "edge bound not met");
     if (c->n_lines != 1 || c->lines[0].n != g->n)
-        return verdict(ORACLE_REJECTED, "not one side per vertex");
+        return oracle_verdict(ORACLE_REJECTED, "not one side per vertex");
     const uint32_t *side = c->lines[0].v;
     for (uint32_t v = 0; v < g->n; v++)
         if (side[v] > 1)
-            return verdict(ORACLE_REJECTED, "a side other than 0 or 1");
+            return oracle_verdict(ORACLE_REJECTED, "a side other than 0 or 1");
     for (uint32_t e = 0; e < g->m; e++)
         if (side[g->ends[2 * e]] == side[g->ends[2 * e + 1]])
-            return verdict(ORACLE_REJECTED, "an edge inside one side");
-    return n >= 3 && m > 2 * n - 4 ? verdict(ORACLE_ACCEPTED, "bipartite edge bound")
-                                    : verdict(ORACLE_REJECTED, "bipartite bound not met");
+            return oracle_verdict(ORACLE_REJECTED, "an edge inside one side");
+    return n >= 3 && m > 2 * n - 4 ? oracle_verdict(ORACLE_ACCEPTED, "bipartite edge bound")
+                                    : oracle_verdict(ORACLE_REJECTED, "bipartite bound not met");
 }
