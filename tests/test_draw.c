@@ -24,6 +24,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "seeded_random.h"
 #include "draw.h"
 #include "draw_oracle.h"
 #include "planewit.h"
@@ -41,15 +42,6 @@ typedef struct {
     uint32_t first[MAX_N + 1], nbr[2 * MAX_M]; /* rot as neighbour lists, for the oracle */
 } plane_case;
 
-static uint64_t rng_state;
-
-static uint32_t rnd(uint32_t bound)
-{
-    rng_state ^= rng_state << 13;
-    rng_state ^= rng_state >> 7;
-    rng_state ^= rng_state << 17;
-    return bound ? (uint32_t)(rng_state % bound) : 0;
-}
 
 /* ---- building cases ------------------------------------------------------ */
 
@@ -376,10 +368,7 @@ static void tutte_declines(void **state)
 
 int main(void)
 {
-    const char *seed_text = getenv("PW_SEED");
-    uint64_t seed = seed_text ? strtoull(seed_text, NULL, 10) : 20261202u;
-    printf("test_draw: seed %llu (set PW_SEED to change)\n", (unsigned long long)seed);
-    rng_state = seed * 2654435761u + 1;
+    rnd_start("test_draw", 20261202u);
     const struct CMUnitTest tests[] = {
         cmocka_unit_test(tiny_graphs),
         cmocka_unit_test(random_plane_graphs),

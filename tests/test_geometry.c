@@ -16,6 +16,7 @@
 #include <stdlib.h>
 #include <string.h>
 
+#include "seeded_random.h"
 #include "planewit.h"
 
 enum { MAXN = 12, MAXM = 40, TEXT = 4096 };
@@ -27,15 +28,6 @@ typedef struct {
     int around[MAXN][MAXN], deg[MAXN];
 } drawing;
 
-static uint64_t rng_state;
-
-static uint32_t rnd(uint32_t bound)
-{
-    rng_state ^= rng_state << 13;
-    rng_state ^= rng_state >> 7;
-    rng_state ^= rng_state << 17;
-    return (uint32_t)(rng_state % bound);
-}
 
 /* ---- the oracle --------------------------------------------------------- */
 
@@ -238,12 +230,9 @@ static void mutate(drawing *d)
 
 static void kernel_agrees_with_brute_force(void **state)
 {
-    const char *seed_text = getenv("PW_SEED");
-    uint64_t seed = seed_text ? strtoull(seed_text, NULL, 10) : 20261201u;
     int accepted = 0, rejected = 0, by_code[64] = {0};
     (void)state;
-    printf("test_geometry: seed %llu (set PW_SEED to change)\n", (unsigned long long)seed);
-    rng_state = seed * 2654435761u + 1;
+    rnd_start("test_geometry", 20261201u);
     for (int round = 0; round < 4000; round++) {
         drawing d;
         random_plane_drawing(&d, round % 2 ? 5 : 9);
