@@ -22,6 +22,10 @@
 #include <string.h>
 
 #define COORD_MAX ((int64_t)1 << 30)
+/* Every value, line and point takes two bytes or more (a token and a separator),
+   so a text no longer than this holds fewer than 2^32 - 1 of each: the counts
+   below cannot wrap. */
+#define MAX_CERT_BYTES (((uint64_t)1 << 33) - 2)
 
 typedef struct {
     pw_lexer lx;
@@ -50,8 +54,6 @@ static int no_memory(parser *p)
 static int push_value(parser *p, uint32_t value)
 {
     pw_cert *c = p->c;
-    if (c->n_values == UINT32_MAX)
-        return pw_fail(p->lx.v, PW_E_LIMIT, PW_FILE_CERT, p->lx.line, "more than 2^32 - 1 values");
     if (pw_grow((void **)&c->values, &c->cap_values, c->n_values + 1, sizeof *c->values) != 0)
         return no_memory(p);
     c->values[c->n_values++] = value;
@@ -61,8 +63,6 @@ static int push_value(parser *p, uint32_t value)
 static int push_item(parser *p, uint32_t key)
 {
     pw_cert *c = p->c;
-    if (c->n_items == UINT32_MAX)
-        return pw_fail(p->lx.v, PW_E_LIMIT, PW_FILE_CERT, p->lx.line, "more than 2^32 - 1 lines");
     if (pw_grow((void **)&c->items, &c->cap_items, c->n_items + 1, sizeof *c->items) != 0)
         return no_memory(p);
     pw_item *it = &c->items[c->n_items++];
@@ -134,8 +134,6 @@ static int parse_point(parser *p)
         read_coordinate(p, &pt.x) != 0 || read_coordinate(p, &pt.y) != 0 ||
         lex_expect_end(&p->lx) != 0)
         return -1;
-    if (c->n_points == UINT32_MAX)
-        return pw_fail(p->lx.v, PW_E_LIMIT, PW_FILE_CERT, p->lx.line, "more than 2^32 - 1 points");
     if (pw_grow((void **)&c->points, &c->cap_points, c->n_points + 1, sizeof *c->points) != 0)
         return no_memory(p);
     pt.line = p->lx.line;
@@ -358,6 +356,9 @@ int pw_cert_parse(const char *buf, size_t len, uint32_t n, pw_cert *c, pw_verdic
     parser p;
     memset(c, 0, sizeof *c);
     lex_init(&p.lx, buf, len, PW_FILE_CERT, v);
+    if ((uint64_t)len > MAX_CERT_BYTES)
+        return pw_fail(v, PW_E_LIMIT, PW_FILE_CERT, 0, "longer than %llu bytes",
+                       (unsigned long long)MAX_CERT_BYTES);
     p.c = c;
     p.n = n;
     if (parse_preamble(&p) != 0)

@@ -118,6 +118,12 @@ int pw_check_bipartite_bound(const pw_graph *g, const char *graph, size_t graph_
 
 /* n elements of size sz, or NULL (overflow or no memory). */
 void *pw_alloc(size_t n, size_t sz);
+#ifdef PW_FAULT_INJECTION
+/* Test builds only: 1 when the counted resource request is the one to fail. */
+int pw_fault_now(void);
+#else
+#define pw_fault_now() 0
+#endif
 /* The same, zero-filled. */
 void *pw_zalloc(size_t n, size_t sz);
 /* Grows *p to hold at least need elements, doubling; 0 ok, -1 failure. */

@@ -15,6 +15,10 @@
 
 #include "internal.h"
 
+#ifndef SPEC_DIR
+#define SPEC_DIR "format-spec/"
+#endif
+
 static pw_status check(const char *graph, const char *cert, pw_verdict *v)
 {
     pw_limits lim;
@@ -277,6 +281,48 @@ static void long_path_needs_no_deep_stack(void **state)
     free(cert);
 }
 
+/* Every code in the spec's table (format-spec/reasons.md) has exactly that name
+   and sentence here; codes outside the table have none. */
+static void reason_names_and_sentences_follow_the_spec(void **state)
+{
+    char line[1024], name[64], sentence[256];
+    unsigned code, rows = 0;
+    (void)state;
+    FILE *f = fopen(SPEC_DIR "reasons.md", "r");
+    assert_non_null(f);
+    while (fgets(line, sizeof line, f) != NULL) {
+        if (sscanf(line, "| %u | `%63[^`]` | %255[^|]|", &code, name, sentence) != 3)
+            continue;
+        size_t len = strlen(sentence);
+        while (len > 0 && sentence[len - 1] == ' ')
+            sentence[--len] = '\0';
+        assert_string_equal(pw_code_name((pw_code)code), name);
+        assert_string_equal(pw_code_sentence((pw_code)code), sentence);
+        rows++;
+    }
+    fclose(f);
+    assert_int_equal(rows, 12 + 32); /* codes 0..11 and 30..61 */
+    assert_string_equal(pw_code_name((pw_code)12), "unknown");
+    assert_string_equal(pw_code_sentence((pw_code)29), "unknown reason code");
+    assert_string_equal(pw_claim_name((pw_claim)3), "none");
+    assert_string_equal(pw_witness_name((pw_witness)8), "none");
+}
+
+/* A stream that fails while being read (a directory: EISDIR) is a read
+   failure, not an empty file. */
+static void read_error_is_not_an_empty_file(void **state)
+{
+    char *buf;
+    size_t len;
+    (void)state;
+    FILE *dir = fopen(".", "r");
+    assert_non_null(dir);
+    assert_int_equal(pw_read_all(dir, 1000, &buf, &len), PW_E_READ);
+    assert_null(buf);
+    assert_int_equal(len, 0);
+    fclose(dir);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
@@ -294,6 +340,8 @@ int main(void)
         cmocka_unit_test(minor_sets_are_checked_in_order),
         cmocka_unit_test(bounds_use_exact_thresholds),
         cmocka_unit_test(long_path_needs_no_deep_stack),
+        cmocka_unit_test(reason_names_and_sentences_follow_the_spec),
+        cmocka_unit_test(read_error_is_not_an_empty_file),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
