@@ -29,6 +29,9 @@ typedef struct {
     pthread_cond_t finished;
 } batch_pool;
 
+/* The pool and thread table of an interrupted run (see batch_run). */
+static void *volatile still_in_use[2];
+
 static void *worker(void *arg)
 {
     batch_pool *pool = arg;
@@ -144,8 +147,14 @@ int batch_run(const batch_config *config, FILE *out, batch_summary *summary,
         return -1;
     }
     int rc = write_in_order(pool, out, summary, progress);
-    if (rc == -2)
-        return rc; /* interrupted: workers may be inside a long job; the process exits now */
+    if (rc == -2) {
+        /* Interrupted: workers may be inside a long job and still use the pool and
+           the thread table, and the process exits now.  Both stay reachable from
+           here, so that leak checkers see memory in use, not memory lost. */
+        still_in_use[0] = pool;
+        still_in_use[1] = threads;
+        return rc;
+    }
     if (rc == -1)
         atomic_store(&pool->next, pool->total); /* no more jobs; finish the ones running */
     for (unsigned t = 0; t < started; t++)
