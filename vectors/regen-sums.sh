@@ -5,7 +5,7 @@
 #     sh vectors/regen-sums.sh
 #     git diff vectors/SHA256SUMS      # review: only the files you meant to touch
 # and commit the vectors, MANIFEST and SHA256SUMS together.  The sums cover
-# MANIFEST and every file below vectors/graphs and vectors/certs, with paths
+# MANIFEST, MESSAGES and every file below vectors/graphs and vectors/certs, with paths
 # relative to vectors/, in the format `sha256sum -c` reads:
 #     (cd vectors && sha256sum -c SHA256SUMS)
 # tests/test_vectors.c refuses to run any case while one line does not match.
@@ -24,6 +24,6 @@ for f in $files; do
     esac
 done
 # shellcheck disable=SC2086 # the names were checked above: no blanks, no globs
-sha256sum MANIFEST $files > SHA256SUMS.new
+sha256sum MANIFEST MESSAGES $files > SHA256SUMS.new
 mv SHA256SUMS.new SHA256SUMS
 echo "vectors/SHA256SUMS: $(wc -l < SHA256SUMS) files; vector-set digest $(sha256sum SHA256SUMS | cut -d' ' -f1)"
