@@ -219,7 +219,8 @@ static int parse_preamble(parser *p)
                        "expected format version 1, found %llu", (unsigned long long)version);
     if (lex_expect_end(&p->lx) != 0 || need_line(p, "'claim'") != 0)
         return -1;
-    if (lex_take(&p->lx, &t) && lex_is(&t, "graph-sha256")) {
+    lex_take(&p->lx, &t); /* need_line found a line with a token */
+    if (lex_is(&t, "graph-sha256")) {
         if (parse_hash(p) != 0 || need_line(p, "'claim'") != 0)
             return -1;
     } else {

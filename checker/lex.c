@@ -163,7 +163,7 @@ int lex_int(pw_lexer *lx, const char *what, int64_t *out)
     uint64_t magnitude = 0;
     if (!lex_take(lx, &t))
         return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
-    int negative = t.len > 0 && t.text[0] == '-';
+    int negative = t.text[0] == '-'; /* a token taken is never empty */
     digits.text = t.text + negative;
     digits.len = t.len - (size_t)negative;
     int why = digits_value(&digits, &magnitude);

@@ -151,7 +151,8 @@ static int fail_vertex(sweep *s, uint32_t x, uint32_t e)
 static int test_pair(sweep *s, uint32_t a, uint32_t b)
 {
     uint32_t a0 = low_end(s, a), a1 = high_end(s, a), b0 = low_end(s, b), b1 = high_end(s, b);
-    if (a0 == b0 || a0 == b1 || a1 == b0 || a1 == b1)
+    /* (An edge that ends where the other starts has left the status by then.) */
+    if (a0 == b0 || a1 == b1)
         return 0;
     pw_xy p = s->at[a0], q = s->at[a1], r = s->at[b0], t = s->at[b1];
     int d1 = pw_orientation(r, t, p), d2 = pw_orientation(r, t, q);

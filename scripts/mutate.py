@@ -17,8 +17,15 @@ and linked with the other kernel objects into the killers, run fastest first:
 A mutant is killed when a killer fails, crashes or times out; stillborn when it
 does not compile.  Score = killed / (killed + survived).
 
+With --asan the kernel and every killer are built with ASan + UBSan and the
+allocation-failure hook (-DPW_FAULT_INJECTION, inert unless a test arms it), and
+tests/fault/alloc_failure.c joins the killers: a deleted free() or a broken
+out-of-memory path is then caught.  --replay FILE tests only the mutants listed
+in FILE (a survivors.txt of an earlier run), e.g. a second, slower pass with
+--asan over the survivors of a plain one.
+
 Usage: scripts/mutate.py [--sample N] [--seed S] [--files rotation.c,...]
-                         [--differential] [--out build-mutate]
+                         [--differential] [--asan] [--replay FILE] [--out build-mutate]
 Run from the repository root.  Survivors are listed in OUT/survivors.txt; each
 must be killed by a new vector or test, or explained as equivalent in the
 results file (bench/results-hardening.md).
@@ -36,6 +43,8 @@ import time
 CC = os.environ.get("CC", "cc")
 CFLAGS = ["-std=c11", "-D_POSIX_C_SOURCE=200809L", "-O1", "-g0", "-w"]
 CRYPTO = ["-lcrypto"]
+LDFLAGS = []
+ASAN = ["-fsanitize=address,undefined", "-fno-sanitize-recover=all"]
 
 REL = {"<": "<=", "<=": "<", ">": ">=", ">=": ">", "==": "!=", "!=": "=="}
 OP_RE = re.compile(r"<<=?|>>=?|->|<=|>=|==|!=|&&|\|\||\+\+|--|<|>")
@@ -158,7 +167,7 @@ def compile_obj(src, obj, extra=()):
 class Killers:
     """The test programs, each as (name, objects besides the kernel, run command)."""
 
-    def __init__(self, out, differential, snapshot):
+    def __init__(self, out, differential, snapshot, asan=False):
         self.out = out
         self.kernel_src = sorted(glob.glob(os.path.join(snapshot, "checker", "*.c")))
         os.makedirs(os.path.join(out, "base"), exist_ok=True)
@@ -176,14 +185,16 @@ class Killers:
         for test in sorted(glob.glob("tests/test_*.c")):
             name = os.path.basename(test)[:-2]
             self.add(name, [test], [], ["-lcmocka"])
+        if asan:
+            self.add("alloc_failure", ["tests/fault/alloc_failure.c"], [support], [])
         if differential:
             srcs = ["tests/fuzz/differential_run.c", "tests/fuzz/differential.c",
                     "tests/fuzz/oracle.c", "tests/fuzz/oracle_text.c",
                     "tests/fuzz/oracle_rules.c", "tests/fuzz/oracle_draw.c", "tests/draw_oracle.c",
                     "tests/fuzz/token_mutate.c", "tests/fuzz/fuzz_common.c"]
             self.add("differential", srcs, [support], [], args=["20"], env={"PW_SEED": "1"})
-        # Fastest first, so that most mutants cost one short run; the oracle last.
-        self.programs.sort(key=lambda p: (p["name"] == "differential", p["seconds"]))
+        # Fastest first, so that most mutants cost one short run; the slow ones last.
+        self.programs.sort(key=lambda p: (p["name"] in ("differential", "alloc_failure"), p["seconds"]))
 
     def add(self, name, srcs, extra_objs, libs, args=(), env=None):
         objs = []
@@ -208,7 +219,7 @@ class Killers:
         print("mutate: killer %-16s %.2fs unmutated" % (name, time.time() - start))
 
     def link(self, prog, kernel, exe):
-        cmd = [CC, "-o", exe] + prog["objs"] + sorted(kernel.values()) + prog["libs"] + CRYPTO
+        cmd = [CC] + LDFLAGS + ["-o", exe] + prog["objs"] + sorted(kernel.values()) + prog["libs"] + CRYPTO
         return run(cmd) == 0
 
     def judge(self, mutated_src, target):
@@ -231,14 +242,31 @@ class Killers:
         return "survived", None
 
 
+def listed_mutants(path):
+    """(file, line, mutated text) of every mutant in a survivors.txt."""
+    wanted, head = set(), None
+    for line in open(path, encoding="ascii"):
+        if line.startswith("    + ") and head:
+            wanted.add((head[0], head[1], line[6:].rstrip("\n").strip()))
+        elif not line.startswith(" "):
+            where = line.split(" ")[0].rsplit(":", 1)
+            head = (where[0], int(where[1]))
+    return wanted
+
+
 def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--sample", type=int, default=0, help="test N mutants drawn at random")
     ap.add_argument("--seed", type=int, default=None)
     ap.add_argument("--files", default="", help="comma-separated names in checker/")
     ap.add_argument("--differential", action="store_true")
+    ap.add_argument("--asan", action="store_true", help="sanitizers, fault hook, alloc_failure")
+    ap.add_argument("--replay", default="", help="test only the mutants in this survivors.txt")
     ap.add_argument("--out", default="build-mutate")
     a = ap.parse_args()
+    if a.asan:
+        CFLAGS.extend(ASAN + ["-DPW_FAULT_INJECTION"])
+        LDFLAGS.extend(ASAN)
     seed = a.seed if a.seed is not None else int(time.time())
     files = ["checker/" + f for f in a.files.split(",")] if a.files else sorted(glob.glob("checker/*.c"))
     shutil.rmtree(a.out, ignore_errors=True)
@@ -248,8 +276,13 @@ def main():
     shutil.copytree("checker", os.path.join(snapshot, "checker"))
     INCLUDE[0] = "-I" + os.path.join(snapshot, "checker")
     files = [os.path.join(snapshot, f) for f in files]
-    killers = Killers(a.out, a.differential, snapshot)
+    killers = Killers(a.out, a.differential, snapshot, a.asan)
     mutants = [m for f in files for m in mutants_of(f)]
+    if a.replay:
+        wanted = listed_mutants(a.replay)
+        mutants = [m for m in mutants
+                   if (os.path.relpath(m[0], snapshot), m[1], m[4].strip()) in wanted]
+        print("mutate: replaying %d of the %d mutants listed in %s" % (len(mutants), len(wanted), a.replay))
     print("mutate: %d mutants in %d files; seed %d" % (len(mutants), len(files), seed))
     if a.sample and a.sample < len(mutants):
         mutants = sorted(random.Random(seed).sample(mutants, a.sample), key=lambda m: (m[0], m[1]))

@@ -323,6 +323,64 @@ static void read_error_is_not_an_empty_file(void **state)
     fclose(dir);
 }
 
+/*
+ * Malformed or borderline certificate lines: the rule, the line and the exact
+ * detail, written from format-spec/certificate.md and format-spec/lexical.md
+ * ("expected X, found 'T'" / "found end of line" / "found end of file").
+ */
+typedef struct {
+    const char *graph, *cert;
+    pw_code code;
+    uint64_t line;
+    const char *detail;
+} line_case;
+
+#define TRI "graph 3 3\n0 1\n1 2\n2 0\n"
+#define HEAD "certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 1\n"
+#define HEX63 "000000000000000000000000000000000000000000000000000000000000000"
+
+static const line_case line_cases[] = {
+    /* the first of two out-of-range coordinates is the one reported */
+    {TRI, HEAD "point 0 : 2000000000 0\npoint 1 : 0 -2000000001\npoint 2 : 1 1\n",
+     PW_R_COORDINATE_RANGE, 6, "coordinate 2000000000 exceeds 2^30 in absolute value"},
+    {TRI, HEAD "point x : 1 1\n", PW_E_NUMBER, 6,
+     "expected a vertex id (decimal digits, no sign, no leading zero), found 'x'"},
+    {TRI, HEAD "point 0 1 1\n", PW_E_SYNTAX, 6, "expected ':', found '1'"},
+    {TRI, HEAD "point 0\n", PW_E_SYNTAX, 6, "expected ':', found end of line"},
+    {TRI, HEAD "point 0 : 1\n", PW_E_SYNTAX, 6, "expected a coordinate, found end of line"},
+    {TRI, HEAD "point 0 : 1 2 3\n", PW_E_SYNTAX, 6, "expected end of line, found '3'"},
+    {TRI, HEAD "point 0 : 5 5\n", PW_R_POINT_COUNT, 6, "1 point line for 3 vertices: give all or none"},
+    {TRI, "certificate 1 1\n", PW_E_SYNTAX, 1, "expected end of line, found '1'"},
+    {TRI, "certificate 1\nclaim\n", PW_E_SYNTAX, 2, "expected 'planar' or 'nonplanar', found end of line"},
+    {TRI, "certificate 1\ngraph-sha256 " HEX63 "0\n", PW_E_SYNTAX, 3,
+     "expected 'claim', found end of file"},
+    {TRI, "certificate 1\ngraph-sha256 +" HEX63 "\nclaim planar\n", PW_E_SYNTAX, 2,
+     "expected 64 lowercase hex digits, found '+0000000000000000000000000000000'..."},
+    {TRI, "certificate 1\ngraph-sha256 0A" HEX63 "\nclaim planar\n", PW_E_SYNTAX, 2,
+     "expected 64 lowercase hex digits, found '0A000000000000000000000000000000'..."},
+    {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset x : 0\n", PW_E_NUMBER, 4,
+     "expected a set index (decimal digits, no sign, no leading zero), found 'x'"},
+    {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset 0 0\n", PW_E_SYNTAX, 4, "expected ':', found '0'"},
+    {TRI, "certificate 1\nclaim nonplanar\nminor k33\nset 0 : 0\n", PW_R_WITNESS_LINES, 3,
+     "a K3,3 minor needs 6 set lines, found 1"},
+    /* a repeat written the other way round still names the earlier line */
+    {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
+     "edge 1 0 repeats the edge on line 2"},
+};
+
+static void malformed_lines_give_rule_line_and_detail(void **state)
+{
+    (void)state;
+    for (size_t i = 0; i < sizeof line_cases / sizeof line_cases[0]; i++) {
+        const line_case *k = &line_cases[i];
+        pw_verdict v;
+        check(k->graph, k->cert, &v);
+        assert_int_equal(v.code, k->code);
+        assert_int_equal(v.line, k->line);
+        assert_string_equal(v.detail, k->detail);
+    }
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
@@ -342,6 +400,7 @@ int main(void)
         cmocka_unit_test(long_path_needs_no_deep_stack),
         cmocka_unit_test(reason_names_and_sentences_follow_the_spec),
         cmocka_unit_test(read_error_is_not_an_empty_file),
+        cmocka_unit_test(malformed_lines_give_rule_line_and_detail),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
