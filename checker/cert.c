@@ -212,11 +212,11 @@ static int parse_preamble(parser *p)
     pw_token t;
     uint64_t version;
     if (need_line(p, "'certificate 1'") != 0 || lex_expect(&p->lx, "certificate") != 0 ||
-        lex_uint(&p->lx, "format version 1", &version) != 0)
+        lex_uint(&p->lx, "a format version", &version) != 0)
         return -1;
     if (version != 1)
         return pw_fail(p->lx.v, PW_E_SYNTAX, PW_FILE_CERT, p->lx.line,
-                       "expected format version 1, found %llu", (unsigned long long)version);
+                       "expected format version 1, found '%llu'", (unsigned long long)version);
     if (lex_expect_end(&p->lx) != 0 || need_line(p, "'claim'") != 0)
         return -1;
     lex_take(&p->lx, &t); /* need_line found a line with a token */

@@ -136,11 +136,11 @@ static int digits_value(const pw_token *t, uint64_t *out)
 }
 
 static int number_failure(pw_lexer *lx, int why, const char *what, const char *form,
-                          const pw_token *t)
+                          const char *range, const pw_token *t)
 {
     char expected[96];
     if (why == -2) {
-        snprintf(expected, sizeof expected, "%s that fits in 64 bits", what);
+        snprintf(expected, sizeof expected, "%s %s", what, range);
         return lex_fail_token(lx, PW_E_RANGE, expected, t);
     }
     snprintf(expected, sizeof expected, "%s (%s)", what, form);
@@ -153,7 +153,8 @@ int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
     if (!lex_take(lx, &t))
         return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
     int why = digits_value(&t, out);
-    return why == 0 ? 0 : number_failure(lx, why, what, "decimal digits, no sign, no leading zero", &t);
+    return why == 0 ? 0 : number_failure(lx, why, what, "decimal digits, no sign, no leading zero",
+                                           "that fits in 64 bits", &t);
 }
 
 /* Signed form, used for coordinates only: an optional '-' before a nonzero number. */
@@ -172,7 +173,8 @@ int lex_int(pw_lexer *lx, const char *what, int64_t *out)
     if (why == 0 && magnitude > (uint64_t)INT64_MAX)
         why = -2;
     if (why != 0)
-        return number_failure(lx, why, what, "decimal digits, '-' allowed, no leading zero, no -0", &t);
+        return number_failure(lx, why, what, "decimal digits, '-' allowed, no leading zero, no -0",
+                              "of magnitude at most 2^63 - 1", &t);
     *out = negative ? -(int64_t)magnitude : (int64_t)magnitude;
     return 0;
 }
