@@ -189,13 +189,15 @@ build-fault/alloc_failure_vg: $(HARD_DEPS)
 # Line and branch coverage of checker/ by the whole suite plus the allocation-failure
 # run (the only way to reach the kernel's out-of-memory paths), gcovr, uncovered listed.
 # Never give gcovr -o a device: it replaces the path with a regular file (it did so
-# to /dev/null once), so its side outputs go to files in build-cov/.
+# to /dev/null once), so its side outputs go to files in build-cov/.  The counters
+# are updated atomically: batch and certify -j run the kernel in several threads,
+# and racing increments once left a negative count that gcovr cannot read.
 GCOVR := gcovr --root . --filter 'checker/' build-cov/checker build-cov/fault
 COV_FAULT_OBJ := $(KERNEL_SRC:checker/%.c=build-cov/fault/%.o) build-cov/fault/t_alloc_failure.o \
                  build-cov/fault/t_vector_list.o
 coverage:
 	rm -rf build-cov
-	-$(MAKE) BUILD=build-cov OPT="-O0 -g --coverage" check
+	-$(MAKE) BUILD=build-cov OPT="-O0 -g --coverage -fprofile-update=atomic" check
 	$(MAKE) build-cov/fault/alloc_failure
 	-build-cov/fault/alloc_failure
 	$(GCOVR) --txt

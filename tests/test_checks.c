@@ -363,6 +363,10 @@ static const line_case line_cases[] = {
     {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset 0 0\n", PW_E_SYNTAX, 4, "expected ':', found '0'"},
     {TRI, "certificate 1\nclaim nonplanar\nminor k33\nset 0 : 0\n", PW_R_WITNESS_LINES, 3,
      "a K3,3 minor needs 6 set lines, found 1"},
+    /* two vertices at one point: both named, in sort order (vertex id breaks the tie), at
+       the point line of the second (format-spec/reasons.md) */
+    {TRI, HEAD "point 2 : 4 4\npoint 0 : 0 0\npoint 1 : 4 4\n", PW_R_POINTS_COINCIDE, 6,
+     "vertices 1 and 2 are both at (4, 4)"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},
@@ -378,6 +382,8 @@ static void malformed_lines_give_rule_line_and_detail(void **state)
         assert_int_equal(v.code, k->code);
         assert_int_equal(v.line, k->line);
         assert_string_equal(v.detail, k->detail);
+        /* counts come from the graph whatever the certificate; only one graph here is refused */
+        assert_int_equal(v.have_counts, k->code != PW_E_REPEATED_EDGE);
     }
 }
 
