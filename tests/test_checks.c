@@ -337,7 +337,8 @@ typedef struct {
 
 #define TRI "graph 3 3\n0 1\n1 2\n2 0\n"
 #define HEAD "certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 0\naround 2 : 0 1\n"
-#define HEX63 "000000000000000000000000000000000000000000000000000000000000000"
+#define HEX62 "00000000000000000000000000000000000000000000000000000000000000"
+#define HEX63 HEX62 "0"
 
 static const line_case line_cases[] = {
     /* the first of two out-of-range coordinates is the one reported */
@@ -356,7 +357,7 @@ static const line_case line_cases[] = {
      "expected 'claim', found end of file"},
     {TRI, "certificate 1\ngraph-sha256 +" HEX63 "\nclaim planar\n", PW_E_SYNTAX, 2,
      "expected 64 lowercase hex digits, found '+0000000000000000000000000000000'..."},
-    {TRI, "certificate 1\ngraph-sha256 0A" HEX63 "\nclaim planar\n", PW_E_SYNTAX, 2,
+    {TRI, "certificate 1\ngraph-sha256 0A" HEX62 "\nclaim planar\n", PW_E_SYNTAX, 2,
      "expected 64 lowercase hex digits, found '0A000000000000000000000000000000'..."},
     {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset x : 0\n", PW_E_NUMBER, 4,
      "expected a set index (decimal digits, no sign, no leading zero), found 'x'"},
@@ -367,6 +368,12 @@ static const line_case line_cases[] = {
        the point line of the second (format-spec/reasons.md) */
     {TRI, HEAD "point 2 : 4 4\npoint 0 : 0 0\npoint 1 : 4 4\n", PW_R_POINTS_COINCIDE, 6,
      "vertices 1 and 2 are both at (4, 4)"},
+    /* a set index beyond 32 bits is kept as "no index" and refused by the check */
+    {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 0\nset 1 : 1\nset 2 : 2\nset 3 : 0\n"
+          "set 4294967296 : 1\n", PW_R_SET_INDEX, 8, "set indices must be 0 to 4, each once"},
+    /* the earlier copy of a repeated pair is found wherever it is */
+    {"graph 4 4\n0 2\n0 1\n2 3\n0 1\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 5,
+     "edge 0 1 repeats the edge on line 3"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},
@@ -382,7 +389,7 @@ static void malformed_lines_give_rule_line_and_detail(void **state)
         assert_int_equal(v.code, k->code);
         assert_int_equal(v.line, k->line);
         assert_string_equal(v.detail, k->detail);
-        /* counts come from the graph whatever the certificate; only one graph here is refused */
+        /* counts come from the graph whatever the certificate; only repeated edges refuse a graph here */
         assert_int_equal(v.have_counts, k->code != PW_E_REPEATED_EDGE);
     }
 }
