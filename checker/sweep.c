@@ -118,11 +118,6 @@ static uint32_t neighbour(const sweep *s, uint32_t e, int above)
 
 /* ---- contacts between two edges --------------------------------------- */
 
-static int within_box(pw_xy p, pw_xy a, pw_xy b)
-{
-    return (p.x - a.x) * (p.x - b.x) <= 0 && (p.y - a.y) * (p.y - b.y) <= 0;
-}
-
 static int fail_pair(sweep *s, pw_code code, uint32_t a, uint32_t b, const char *verb)
 {
     return pw_fail(s->v, code, PW_FILE_CERT, s->point_line[low_end(s, a)],
@@ -137,32 +132,24 @@ static int fail_vertex(sweep *s, uint32_t x, uint32_t e)
 }
 
 /*
- * Only two contacts are left for this test to find; the others are reported
- * earlier, while the status is still correctly ordered:
- * - two edges with a common end meet elsewhere only if they overlap; with a
+ * Only a proper crossing is left for this test: every other contact is reported
+ * at an event, while the status is still correctly ordered.
+ * - Two edges with a common end meet elsewhere only by overlapping.  With a
  *   common low end, status_insert compares the second with the first (a search
- *   for a key equal to a node's passes through that node) and reports it; with
- *   a common high end, the shorter edge's low end lies inside the longer one;
- * - a collinear overlap without a common end, or a low end inside the other
- *   edge, puts the later low end inside an edge that spans its event, and
- *   locate() at that event finds it (the same search argument).
- * What remains: a proper crossing, or a high end inside the other edge.
+ *   for a key equal to a node's passes through that node) and reports it; with a
+ *   common high end, the shorter edge's low end lies inside the longer one.
+ * - A vertex inside an edge (an end of another edge, collinear overlaps
+ *   included) lies inside an edge that spans its event, and locate() at that
+ *   event finds it by the same search argument.
+ * Two edges with a common end never pass this test: one orientation is 0.
  */
 static int test_pair(sweep *s, uint32_t a, uint32_t b)
 {
-    uint32_t a0 = low_end(s, a), a1 = high_end(s, a), b0 = low_end(s, b), b1 = high_end(s, b);
-    /* (An edge that ends where the other starts has left the status by then.) */
-    if (a0 == b0 || a1 == b1)
-        return 0;
-    pw_xy p = s->at[a0], q = s->at[a1], r = s->at[b0], t = s->at[b1];
-    int d1 = pw_orientation(r, t, p), d2 = pw_orientation(r, t, q);
-    int d3 = pw_orientation(p, q, r), d4 = pw_orientation(p, q, t);
-    if (d1 * d2 < 0 && d3 * d4 < 0)
+    pw_xy p = s->at[low_end(s, a)], q = s->at[high_end(s, a)];
+    pw_xy r = s->at[low_end(s, b)], t = s->at[high_end(s, b)];
+    if (pw_orientation(r, t, p) * pw_orientation(r, t, q) < 0 &&
+        pw_orientation(p, q, r) * pw_orientation(p, q, t) < 0)
         return fail_pair(s, PW_R_EDGES_CROSS, a, b, "crosses");
-    if (d2 == 0 && within_box(q, r, t))
-        return fail_vertex(s, a1, b);
-    if (d4 == 0 && within_box(t, p, q))
-        return fail_vertex(s, b1, a);
     return 0;
 }
 
