@@ -17,7 +17,8 @@ mkdir -p "$out/corpus/$t" "$out/findings/$t" "$out/seeds/$t"
 log="$out/long-$t.log"
 # The timeout is wall time: at nice 19 a busy machine can starve a harness for
 # many seconds (a 10 s limit once flagged an input that replays in 0.1 s), so a
-# long run allows 120 s and still catches a real hang.
+# long run allows 120 s and still catches a real hang; slow-unit reports (also
+# wall time) start at 120 s too.
 # The importers report every refused input on stderr (millions of lines an
 # hour); -close_fd_mask=2 silences the harness while libFuzzer keeps its own
 # output and routes sanitizer reports to it.
@@ -25,7 +26,7 @@ quiet=""
 [ "$t" = import ] && quiet="-close_fd_mask=2"
 start=$(date -u +%Y-%m-%dT%H:%M:%SZ)
 nice -n 19 "$out/fuzz_$t" "$out/corpus/$t" "$out/seeds/$t" -dict=tests/fuzz/planewit.dict \
-    -timeout=120 -rss_limit_mb=1024 -max_len=8192 -artifact_prefix="$out/findings/$t/" \
+    -timeout=120 -report_slow_units=120 -rss_limit_mb=1024 -max_len=8192 -artifact_prefix="$out/findings/$t/" \
     -print_final_stats=1 $quiet >"$log" 2>&1 &
 pid=$!
 ticks=$(getconf CLK_TCK)
