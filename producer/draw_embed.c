@@ -105,9 +105,8 @@ static void label_from(const pd_embed *e, uint32_t s, uint32_t id, uint32_t *of,
     }
 }
 
-int pd_components_find(const pd_embed *e, pd_components *c)
+static int components_alloc(pd_components *c, uint32_t n)
 {
-    uint32_t n = e->n;
     memset(c, 0, sizeof *c);
     c->of = malloc(((size_t)n + 1) * sizeof *c->of);
     c->member = malloc(((size_t)n + 1) * sizeof *c->member);
@@ -115,6 +114,30 @@ int pd_components_find(const pd_embed *e, pd_components *c)
         pd_components_free(c);
         return -1;
     }
+    return 0;
+}
+
+int pd_components_whole(uint32_t n, pd_components *c)
+{
+    if (components_alloc(c, n) != 0 || (c->start = malloc(2 * sizeof *c->start)) == NULL) {
+        pd_components_free(c);
+        return -1;
+    }
+    for (uint32_t v = 0; v < n; v++) {
+        c->of[v] = 0;
+        c->member[v] = v;
+    }
+    c->count = 1;
+    c->start[0] = 0;
+    c->start[1] = n;
+    return 0;
+}
+
+int pd_components_find(const pd_embed *e, pd_components *c)
+{
+    uint32_t n = e->n;
+    if (components_alloc(c, n) != 0)
+        return -1;
     for (uint32_t v = 0; v < n; v++)
         c->of[v] = PW_NONE;
     for (uint32_t v = 0; v < n; v++)

@@ -45,6 +45,8 @@ typedef struct {
 } pd_components;
 
 int pd_components_find(const pd_embed *e, pd_components *c);
+/* The same for a graph known to be connected: one component, vertices 0 .. n-1. */
+int pd_components_whole(uint32_t n, pd_components *c);
 void pd_components_free(pd_components *c);
 
 /* Adds edges until every component of >= 3 vertices is biconnected (draw_augment.c). */

@@ -114,11 +114,21 @@ static int draw_all(const pd_embed *e, const pd_components *c, pd_drawing *d)
     return 0;
 }
 
+/*
+ * A simple planar graph with 3N - 6 edges (N >= 3) is a triangulation: it is
+ * maximal planar, so connected, every face of any embedding is a triangle and
+ * no vertex is a cut vertex (Euler's formula).  Then nothing needs adding.
+ */
+static int is_triangulation(const pw_graph *g)
+{
+    return g->n >= 3 && (uint64_t)g->m == 3 * (uint64_t)g->n - 6;
+}
+
 int pd_draw_grid(const pw_graph *g, const uint32_t *rot, pd_drawing *out)
 {
     pd_embed e;
     pd_components c;
-    int rc = -1;
+    int rc = -1, whole = is_triangulation(g);
     memset(out, 0, sizeof *out);
     out->n = g->n;
     out->x = calloc((size_t)g->n + 1, sizeof *out->x);
@@ -127,8 +137,8 @@ int pd_draw_grid(const pw_graph *g, const uint32_t *rot, pd_drawing *out)
         pd_drawing_free(out);
         return -1;
     }
-    if (pd_components_find(&e, &c) == 0) {
-        if (pd_biconnect(&e) == 0 && pd_triangulate(&e) == 0)
+    if ((whole ? pd_components_whole(g->n, &c) : pd_components_find(&e, &c)) == 0) {
+        if (whole || (pd_biconnect(&e) == 0 && pd_triangulate(&e) == 0))
             rc = draw_all(&e, &c, out);
         pd_components_free(&c);
     }
