@@ -1,8 +1,9 @@
 /*
  * cert_write.c - the certificate text: certify's, and draw's planar one
  * with its point lines (draw_cert.c).  At 10^7 edges the file has about
- * 2 * 10^7 numbers, so numbers are formatted by hand into a large buffer and
- * handed to stdio in big blocks.
+ * 2 * 10^7 numbers, so numbers are formatted by hand into a large buffer:
+ * handed to stdio in big blocks, or for draw's text in memory, one buffer
+ * sized up front from the counts, so the text is never copied.
  */
 #include <stdlib.h>
 #include <string.h>
@@ -10,14 +11,26 @@
 #include "certify.h"
 
 #define OUT_BUFFER 65536
+#define NUMBER_ROOM 22 /* space, sign and 20 digits */
+#if defined(__GNUC__)
+#define PREFETCH(p) __builtin_prefetch(p)
+#else
+#define PREFETCH(p) ((void)0)
+#endif
+#define AHEAD 8
 
 typedef struct {
-    FILE *out;
-    size_t len;
+    FILE *out; /* NULL: the text stays in buf, which grows when needed */
+    char *buf;
+    size_t len, cap; /* cap >= OUT_BUFFER */
     int failed;
-    char buf[OUT_BUFFER];
 } writer;
 
+/*
+ * Makes room for `need` <= OUT_BUFFER more bytes: hands the buffer to the
+ * file, or grows it.  After a failure the text is lost and writing goes on
+ * into the start of the buffer, so callers need not check every step.
+ */
 static void flush(writer *w)
 {
     if (w->len > 0 && !w->failed && fwrite(w->buf, 1, w->len, w->out) != w->len)
@@ -25,11 +38,28 @@ static void flush(writer *w)
     w->len = 0;
 }
 
+static void make_room(writer *w, size_t need)
+{
+    if (w->len + need <= w->cap)
+        return;
+    if (w->out != NULL) {
+        flush(w);
+        return;
+    }
+    char *bigger = w->cap <= SIZE_MAX / 2 ? realloc(w->buf, 2 * w->cap) : NULL;
+    if (bigger == NULL) {
+        w->failed = 1;
+        w->len = 0;
+        return;
+    }
+    w->buf = bigger;
+    w->cap *= 2;
+}
+
 static void put_text(writer *w, const char *text)
 {
     size_t n = strlen(text);
-    if (w->len + n > OUT_BUFFER)
-        flush(w);
+    make_room(w, n);
     memcpy(w->buf + w->len, text, n);
     w->len += n;
 }
@@ -41,8 +71,7 @@ static void put_number(writer *w, int64_t x)
     char digits[20];
     int k = 0;
     uint64_t u = x < 0 ? (uint64_t)0 - (uint64_t)x : (uint64_t)x;
-    if (w->len + 2 + sizeof digits > OUT_BUFFER)
-        flush(w);
+    make_room(w, NUMBER_ROOM);
     do {
         digits[k++] = (char)('0' + u % 10u);
         u /= 10u;
@@ -70,16 +99,21 @@ static void put_header(writer *w, const unsigned char *sha)
     put_text(w, line);
 }
 
+/* The neighbour look-ups go to g->ends at random (ids are arbitrary), so
+   each is started AHEAD darts early; rot itself is read in order. */
 static void put_rotation(writer *w, const pw_graph *g, const uint32_t *rot)
 {
+    uint32_t darts = 2 * g->m;
     put_text(w, "claim planar\n");
     for (uint32_t v = 0; v < g->n; v++) {
         put_text(w, "around");
         put_number(w, v);
         put_text(w, " :");
-        if (v < g->n_adj)
-            for (uint32_t i = g->first[v]; i < g->first[v + 1]; i++)
-                put_number(w, g->ends[rot[i] ^ 1u]);
+        for (uint32_t i = v < g->n_adj ? g->first[v] : 0; v < g->n_adj && i < g->first[v + 1]; i++) {
+            if (i + AHEAD < darts)
+                PREFETCH(&g->ends[rot[i + AHEAD] ^ 1u]);
+            put_number(w, g->ends[rot[i] ^ 1u]);
+        }
         put_text(w, "\n");
     }
 }
@@ -116,13 +150,18 @@ static void put_points(writer *w, uint32_t n, const int64_t *x, const int64_t *y
     }
 }
 
-/* NULL when memory runs out. */
+/* To a file through a 64 KiB buffer: NULL when memory runs out. */
 static writer *writer_open(FILE *out)
 {
-    writer *w = malloc(sizeof *w); /* 64 KiB: kept off the stack */
+    writer *w = malloc(sizeof *w);
+    if (w != NULL && (w->buf = malloc(OUT_BUFFER)) == NULL) {
+        free(w);
+        w = NULL;
+    }
     if (w != NULL) {
         w->out = out;
         w->len = 0;
+        w->cap = OUT_BUFFER;
         w->failed = 0;
     }
     return w;
@@ -133,6 +172,7 @@ static int writer_close(writer *w)
 {
     flush(w);
     int failed = w->failed || fflush(w->out) != 0;
+    free(w->buf);
     free(w);
     return failed ? -1 : 0;
 }
@@ -151,14 +191,36 @@ int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
     return writer_close(w);
 }
 
-int pp_write_drawing_cert(FILE *out, const pw_graph *g, const uint32_t *rot, const int64_t *x,
-                          const int64_t *y, const unsigned char *graph_sha256)
+/*
+ * The longest text the counts allow: header lines, then per vertex an around
+ * line of at most 20 bytes plus a number per dart, and a point line of at
+ * most 5 + 3 numbers + 3 bytes.
+ */
+static size_t drawing_text_bound(const pw_graph *g)
 {
-    writer *w = writer_open(out);
-    if (w == NULL)
+    return 200 + (size_t)g->n * (20 + 5 + 3 * NUMBER_ROOM + 3) + 2 * (size_t)g->m * NUMBER_ROOM;
+}
+
+int pp_drawing_cert_text(const pw_graph *g, const uint32_t *rot, const int64_t *x,
+                         const int64_t *y, const unsigned char *graph_sha256, char **text,
+                         size_t *len)
+{
+    size_t bound = drawing_text_bound(g);
+    writer w = {NULL, malloc(bound > OUT_BUFFER ? bound : OUT_BUFFER), 0,
+                bound > OUT_BUFFER ? bound : OUT_BUFFER, 0};
+    *text = NULL;
+    *len = 0;
+    if (w.buf == NULL)
         return -1;
-    put_header(w, graph_sha256);
-    put_rotation(w, g, rot);
-    put_points(w, g->n, x, y);
-    return writer_close(w);
+    put_header(&w, graph_sha256);
+    put_rotation(&w, g, rot);
+    put_points(&w, g->n, x, y);
+    if (w.failed) {
+        free(w.buf);
+        return -1;
+    }
+    char *fitted = realloc(w.buf, w.len + 1); /* give back the unused room */
+    *text = fitted != NULL ? fitted : w.buf;
+    *len = w.len;
+    return 0;
 }

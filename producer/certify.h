@@ -44,10 +44,11 @@ unsigned pp_path_count(const pp_result *r);
 int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
                   const unsigned char *graph_sha256);
 
-/* Writes a planar certificate with coordinates: rot's around lines, then a
-   point line (x[v], y[v]) for every vertex v.  Returns 0, or -1 on a write
-   error. */
-int pp_write_drawing_cert(FILE *out, const pw_graph *g, const uint32_t *rot, const int64_t *x,
-                          const int64_t *y, const unsigned char *graph_sha256);
+/* A planar certificate with coordinates, into a fresh buffer the caller
+   frees: rot's around lines, then a point line (x[v], y[v]) for every vertex
+   v.  Returns 0, or -1 when memory runs out (*text NULL). */
+int pp_drawing_cert_text(const pw_graph *g, const uint32_t *rot, const int64_t *x,
+                         const int64_t *y, const unsigned char *graph_sha256, char **text,
+                         size_t *len);
 
 #endif
