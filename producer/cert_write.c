@@ -8,16 +8,10 @@
 #include <stdlib.h>
 #include <string.h>
 
-#include "certify.h"
+#include "pp_state.h"
 
 #define OUT_BUFFER 65536
 #define NUMBER_ROOM 22 /* space, sign and 20 digits */
-#if defined(__GNUC__)
-#define PREFETCH(p) __builtin_prefetch(p)
-#else
-#define PREFETCH(p) ((void)0)
-#endif
-#define AHEAD 8
 
 typedef struct {
     FILE *out; /* NULL: the text stays in buf, which grows when needed */
@@ -100,7 +94,7 @@ static void put_header(writer *w, const unsigned char *sha)
 }
 
 /* The neighbour look-ups go to g->ends at random (ids are arbitrary), so
-   each is started AHEAD darts early; rot itself is read in order. */
+   each is started PP_AHEAD darts early; rot itself is read in order. */
 static void put_rotation(writer *w, const pw_graph *g, const uint32_t *rot)
 {
     uint32_t darts = 2 * g->m;
@@ -110,8 +104,8 @@ static void put_rotation(writer *w, const pw_graph *g, const uint32_t *rot)
         put_number(w, v);
         put_text(w, " :");
         for (uint32_t i = v < g->n_adj ? g->first[v] : 0; v < g->n_adj && i < g->first[v + 1]; i++) {
-            if (i + AHEAD < darts)
-                PREFETCH(&g->ends[rot[i + AHEAD] ^ 1u]);
+            if (i + PP_AHEAD < darts)
+                PP_PREFETCH(&g->ends[rot[i + PP_AHEAD] ^ 1u]);
             put_number(w, g->ends[rot[i] ^ 1u]);
         }
         put_text(w, "\n");

@@ -8,11 +8,6 @@
  */
 #include "pp_state.h"
 
-#if defined(__GNUC__)
-#define PREFETCH(p) __builtin_prefetch(p)
-#else
-#define PREFETCH(p) ((void)0)
-#endif
 #define AHEAD 3 /* darts looked up ahead of the one being examined */
 
 static uint32_t min_u32(uint32_t a, uint32_t b) { return a < b ? a : b; }
@@ -64,7 +59,7 @@ static void search_from(pp_state *s, uint32_t root, uint32_t *next_dfi, uint32_t
         uint32_t i = iter[x], end = g->first[s->vertex_of[x] + 1], fresh = PP_NIL;
         for (; i < end; i++) {
             if (i + AHEAD < end)
-                PREFETCH(&s->dfi_of[nbr[i + AHEAD]]);
+                PP_PREFETCH(&s->dfi_of[nbr[i + AHEAD]]);
             uint32_t y = s->dfi_of[nbr[i]];
             if (y == PP_NIL) {
                 fresh = i++;

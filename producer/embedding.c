@@ -89,6 +89,14 @@ int pp_finish_embedding(pp_state *s, uint32_t *rot)
     const pw_graph *g = s->g;
     merge_leftover_roots(s);
     for (uint32_t x = 0; x < s->n; x++) {
+        if (x + PP_AHEAD < s->n) { /* each list starts at a random place: fetch early */
+            uint32_t later = s->head[x + PP_AHEAD];
+            PP_PREFETCH(&g->first[s->vertex_of[x + PP_AHEAD]]);
+            if (later != PP_NIL) {
+                PP_PREFETCH(&s->nxt[later]);
+                PP_PREFETCH(&g->ends[later]);
+            }
+        }
         if (s->parent[x] != PP_NIL)
             s->flipped[x] ^= s->flipped[s->parent[x]];
         uint32_t u = s->vertex_of[x], at = g->first[u], end = g->first[u + 1];

@@ -27,6 +27,14 @@
 #define PP_ERR_NOMEM (-1)
 #define PP_ERR_BUG (-2)
 
+/* Loads started early where ids lead to random places (a hint, nothing more). */
+#if defined(__GNUC__)
+#define PP_PREFETCH(p) __builtin_prefetch(p)
+#else
+#define PP_PREFETCH(p) ((void)0)
+#endif
+#define PP_AHEAD 8 /* how far ahead, in list entries or vertices */
+
 typedef struct {
     const pw_graph *g;
     uint32_t n;          /* g->n_adj: the vertices that have adjacency */
