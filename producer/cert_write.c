@@ -20,11 +20,6 @@ typedef struct {
     int failed;
 } writer;
 
-/*
- * Makes room for `need` <= OUT_BUFFER more bytes: hands the buffer to the
- * file, or grows it.  After a failure the text is lost and writing goes on
- * into the start of the buffer, so callers need not check every step.
- */
 static void flush(writer *w)
 {
     if (w->len > 0 && !w->failed && fwrite(w->buf, 1, w->len, w->out) != w->len)
@@ -32,6 +27,11 @@ static void flush(writer *w)
     w->len = 0;
 }
 
+/*
+ * Makes room for `need` <= OUT_BUFFER more bytes: hands the buffer to the
+ * file, or grows it.  After a failure the text is lost and writing goes on
+ * into the start of the buffer, so callers need not check every step.
+ */
 static void make_room(writer *w, size_t need)
 {
     if (w->len + need <= w->cap)
