@@ -22,7 +22,11 @@ field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
     echo "kernel: the kernel's check of it; draw: the whole \`planewit draw -o\` process (parse,"
     echo "planarity test, drawing, kernel check, write).  Boost: embed + make_connected +"
     echo "make_biconnected_planar + make_maximal_planar (re-embedding after each) +"
-    echo "planar_canonical_ordering + chrobak_payne_straight_line_drawing."
+    echo "planar_canonical_ordering + chrobak_payne_straight_line_drawing.  ours, text and"
+    echo "kernel come from bench/draw_bench.c with the default allocator; draw is the real"
+    echo "process, which keeps one heap on huge pages (cli/heap.c)."
+    echo
+    echo "Load average at the start (1, 5, 15 min): $(cut -d' ' -f1-3 /proc/loadavg 2>/dev/null || echo unknown)"
     echo
     echo "| family | N | M | ours | text | kernel | draw | Boost | draw/Boost | grid ours | grid Boost | area ratio |"
     echo "|---|---|---|---|---|---|---|---|---|---|---|---|"
@@ -46,4 +50,8 @@ for family in trigrid stacked sparse forest; do
          "$(field "$ours" text) | $(field "$ours" kernel) | $draw | $bt | $ratio |" \
          "${gw}x$gh | ${bw}x$bh | $area |" >> "$out"
 done
+{
+    echo
+    echo "Load average at the end (1, 5, 15 min): $(cut -d' ' -f1-3 /proc/loadavg 2>/dev/null || echo unknown)"
+} >> "$out"
 cat "$out"
