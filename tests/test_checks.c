@@ -394,6 +394,18 @@ static void malformed_lines_give_rule_line_and_detail(void **state)
     }
 }
 
+/* The defaults format-spec/limits.md documents. */
+static void limits_default_as_documented(void **state)
+{
+    pw_limits lim;
+    (void)state;
+    memset(&lim, 0xff, sizeof lim);
+    pw_limits_default(&lim);
+    assert_int_equal(lim.max_bytes, 4294967296u);
+    assert_int_equal(lim.max_vertices, 100000000u);
+    assert_int_equal(lim.max_edges, 300000000u);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
@@ -414,6 +426,7 @@ int main(void)
         cmocka_unit_test(reason_names_and_sentences_follow_the_spec),
         cmocka_unit_test(read_error_is_not_an_empty_file),
         cmocka_unit_test(malformed_lines_give_rule_line_and_detail),
+        cmocka_unit_test(limits_default_as_documented),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
