@@ -41,9 +41,16 @@ typedef struct {
     int agrees;        /* 1 yes, 0 no, -1 no expected claim */
 } job_result;
 
-/* Checks job `index` of the list (batch_job.c); never fails: errors become verdicts. */
+/* A worker's reusable file buffer. */
+typedef struct {
+    char *bytes;
+    size_t cap;
+} batch_buffer;
+
+/* Checks job `index` of the list (batch_job.c) reading the files into the
+   worker's two buffers; never fails: errors become verdicts. */
 void batch_check_job(const job_list *list, size_t index, const pw_limits *lim,
-                     job_result *out);
+                     batch_buffer scratch[2], job_result *out);
 
 /* Which jobs a run takes: every `count`-th job starting at `first` (0-based). */
 typedef struct {

@@ -3,11 +3,15 @@
  *
  * Workers take the shard's jobs in order from a shared counter, so a slow job
  * holds up only the thread that has it; the others go on with the rest.
- * Each result waits in its slot until the writer (the calling thread) has
- * written every earlier job: the output is in job order whatever the
- * threads' timing.  Memory: one small slot per job plus the lines finished
- * but not yet written.  On SIGINT/SIGTERM the workers stop taking jobs and
- * the writer returns at once; the caller removes the temporary output.
+ * Each result waits in its slot until every earlier job is written; the
+ * worker that completes the oldest unwritten job writes it and every ready
+ * one after it, so the output is in job order whatever the threads' timing,
+ * and no thread is woken per job (waking a writer thread for every job cost
+ * a third of a run of small jobs).  The calling thread only draws progress
+ * and watches for interrupts.  Memory: one small slot per job plus the lines
+ * finished but not yet written.  On SIGINT/SIGTERM the workers stop taking
+ * jobs and writing; batch_run returns once no worker is mid-write, and the
+ * caller removes the temporary output.
  */
 #include "batch.h"
 
@@ -20,40 +24,88 @@ typedef struct {
     const job_list *list;
     const batch_shard *shard;
     const pw_limits *lim;
+    FILE *out;
+    batch_summary *summary;
     size_t total;           /* jobs in the shard */
     job_result *results;    /* one per shard job */
-    unsigned char *ready;   /* set under `lock` when results[k] is complete */
     atomic_size_t next;     /* the next shard job a worker takes */
     atomic_size_t done;     /* jobs completed, for progress */
-    pthread_mutex_t lock;
-    pthread_cond_t finished;
+    pthread_mutex_t lock;   /* guards the fields below */
+    pthread_cond_t changed; /* all written, or writing stopped */
+    unsigned char *ready;   /* results[k] is complete */
+    size_t written;         /* shard jobs written, in order */
+    int writing;            /* a worker is writing (outside the lock) */
+    int stop;               /* write nothing more: interrupted or failed */
+    int failed;             /* a write failed or a line was out of memory */
 } batch_pool;
 
 /* The pool and thread table of an interrupted run (see batch_run). */
 static void *volatile still_in_use[2];
 
+static size_t job_of(const batch_pool *pool, size_t k)
+{
+    return pool->shard->first + k * pool->shard->count;
+}
+
+/* Writes shard job k's line; 0, or -1 on a write error or missing line. */
+static int write_result(batch_pool *pool, size_t k)
+{
+    job_result *r = &pool->results[k];
+    if (r->line == NULL || fwrite(r->line, 1, r->len, pool->out) != r->len)
+        return -1;
+    free(r->line);
+    r->line = NULL;
+    summary_add(pool->summary, pool->list, job_of(pool, k), r);
+    return 0;
+}
+
+/* Marks shard job k complete; unless another worker is writing, writes all ready lines. */
+static void complete(batch_pool *pool, size_t k)
+{
+    pthread_mutex_lock(&pool->lock);
+    pool->ready[k] = 1;
+    if (!pool->writing) {
+        pool->writing = 1;
+        while (!pool->stop && pool->written < pool->total && pool->ready[pool->written]) {
+            size_t at = pool->written;
+            pthread_mutex_unlock(&pool->lock);
+            int result = write_result(pool, at);
+            pthread_mutex_lock(&pool->lock);
+            if (result != 0) {
+                pool->stop = pool->failed = 1;
+                atomic_store(&pool->next, pool->total); /* no more jobs; finish the ones running */
+            }
+            pool->written++;
+        }
+        pool->writing = 0;
+        if (pool->stop || pool->written == pool->total)
+            pthread_cond_broadcast(&pool->changed);
+    }
+    pthread_mutex_unlock(&pool->lock);
+}
+
 static void *worker(void *arg)
 {
     batch_pool *pool = arg;
+    batch_buffer scratch[2] = {{NULL, 0}, {NULL, 0}};
     for (;;) {
         size_t k = atomic_fetch_add(&pool->next, 1);
         if (k >= pool->total || cli_interrupted)
-            return NULL;
-        size_t job = pool->shard->first + k * pool->shard->count;
-        batch_check_job(pool->list, job, pool->lim, &pool->results[k]);
-        pthread_mutex_lock(&pool->lock);
-        pool->ready[k] = 1;
-        pthread_cond_broadcast(&pool->finished);
-        pthread_mutex_unlock(&pool->lock);
+            break;
+        batch_check_job(pool->list, job_of(pool, k), pool->lim, scratch, &pool->results[k]);
         atomic_fetch_add(&pool->done, 1);
+        complete(pool, k);
     }
+    free(scratch[0].bytes);
+    free(scratch[1].bytes);
+    return NULL;
 }
 
-/* Waits for shard job k; 0 when ready, -1 when interrupted first. */
-static int wait_for(batch_pool *pool, size_t k, batch_progress *progress)
+/* Until every line is written or writing stopped: 0 done, -1 failed, -2 interrupted. */
+static int watch(batch_pool *pool, batch_progress *progress)
 {
     pthread_mutex_lock(&pool->lock);
-    while (!pool->ready[k] && !cli_interrupted) {
+    while (pool->written < pool->total && !pool->stop && !cli_interrupted) {
         struct timespec until;
         clock_gettime(CLOCK_REALTIME, &until);
         until.tv_nsec += 100000000L; /* wake often enough to see Ctrl-C and draw progress */
@@ -61,43 +113,32 @@ static int wait_for(batch_pool *pool, size_t k, batch_progress *progress)
             until.tv_sec++;
             until.tv_nsec -= 1000000000L;
         }
-        pthread_cond_timedwait(&pool->finished, &pool->lock, &until);
+        pthread_cond_timedwait(&pool->changed, &pool->lock, &until);
         pthread_mutex_unlock(&pool->lock);
         progress_update(progress, atomic_load(&pool->done));
         pthread_mutex_lock(&pool->lock);
     }
-    int ready = pool->ready[k];
-    pthread_mutex_unlock(&pool->lock);
-    return ready ? 0 : -1;
-}
-
-/* Writes every result in order; 0 done, -1 write error or out of memory, -2 interrupted. */
-static int write_in_order(batch_pool *pool, FILE *out, batch_summary *summary,
-                          batch_progress *progress)
-{
-    for (size_t k = 0; k < pool->total; k++) {
-        if (wait_for(pool, k, progress) != 0)
-            return -2;
-        job_result *r = &pool->results[k];
-        if (r->line == NULL || fwrite(r->line, 1, r->len, out) != r->len)
-            return -1;
-        free(r->line);
-        r->line = NULL;
-        summary_add(summary, pool->list, pool->shard->first + k * pool->shard->count, r);
-        progress_update(progress, atomic_load(&pool->done));
+    if (cli_interrupted && pool->written < pool->total && !pool->failed) {
+        pool->stop = 1;
+        while (pool->writing) /* the output is about to be removed: let the last write end */
+            pthread_cond_wait(&pool->changed, &pool->lock);
     }
-    return 0;
+    int rc = pool->failed ? -1 : pool->written < pool->total ? -2 : 0;
+    pthread_mutex_unlock(&pool->lock);
+    return rc;
 }
 
-static batch_pool *pool_new(const job_list *list, const batch_shard *shard, const pw_limits *lim)
+static batch_pool *pool_new(const batch_config *config, FILE *out, batch_summary *summary)
 {
     batch_pool *pool = calloc(1, sizeof *pool);
     if (pool == NULL)
         return NULL;
-    pool->list = list;
-    pool->shard = shard;
-    pool->lim = lim;
-    pool->total = batch_shard_size(shard, list->count);
+    pool->list = config->list;
+    pool->shard = &config->shard;
+    pool->lim = &config->lim;
+    pool->out = out;
+    pool->summary = summary;
+    pool->total = batch_shard_size(&config->shard, config->list->count);
     pool->results = calloc(pool->total ? pool->total : 1, sizeof *pool->results);
     pool->ready = calloc(pool->total ? pool->total : 1, 1);
     atomic_init(&pool->next, 0);
@@ -109,14 +150,14 @@ static batch_pool *pool_new(const job_list *list, const batch_shard *shard, cons
         return NULL;
     }
     pthread_mutex_init(&pool->lock, NULL);
-    pthread_cond_init(&pool->finished, NULL);
+    pthread_cond_init(&pool->changed, NULL);
     return pool;
 }
 
 static void pool_free(batch_pool *pool)
 {
     pthread_mutex_destroy(&pool->lock);
-    pthread_cond_destroy(&pool->finished);
+    pthread_cond_destroy(&pool->changed);
     free(pool->results);
     free(pool->ready);
     free(pool);
@@ -125,7 +166,7 @@ static void pool_free(batch_pool *pool)
 int batch_run(const batch_config *config, FILE *out, batch_summary *summary,
               batch_progress *progress)
 {
-    batch_pool *pool = pool_new(config->list, &config->shard, &config->lim);
+    batch_pool *pool = pool_new(config, out, summary);
     pthread_t *threads = malloc(config->threads * sizeof *threads);
     unsigned started = 0;
     if (pool == NULL || threads == NULL) {
@@ -146,7 +187,7 @@ int batch_run(const batch_config *config, FILE *out, batch_summary *summary,
         pool_free(pool);
         return -1;
     }
-    int rc = write_in_order(pool, out, summary, progress);
+    int rc = watch(pool, progress);
     if (rc == -2) {
         /* Interrupted: workers may be inside a long job and still use the pool and
            the thread table, and the process exits now.  Both stay reachable from
@@ -155,8 +196,6 @@ int batch_run(const batch_config *config, FILE *out, batch_summary *summary,
         still_in_use[1] = threads;
         return rc;
     }
-    if (rc == -1)
-        atomic_store(&pool->next, pool->total); /* no more jobs; finish the ones running */
     for (unsigned t = 0; t < started; t++)
         pthread_join(threads[t], NULL);
     for (size_t k = 0; k < pool->total; k++)

@@ -40,19 +40,24 @@ static size_t utf8_length(const unsigned char *p)
  */
 void json_string(FILE *out, const char *s)
 {
+    const unsigned char *p = (const unsigned char *)s;
     fputc('"', out);
-    for (const unsigned char *p = (const unsigned char *)s; *p; p++) {
+    for (;;) {
+        size_t plain = 0; /* printable ASCII needing no escape: one write per run, not per byte */
+        while (p[plain] >= 0x20 && p[plain] < 0x7f && p[plain] != '"' && p[plain] != '\\')
+            plain++;
+        fwrite(p, 1, plain, out);
+        p += plain;
+        if (*p == '\0')
+            break;
         size_t n = *p >= 0x80 ? utf8_length(p) : 0;
-        if (n > 0) {
+        if (n > 0)
             fwrite(p, 1, n, out);
-            p += n - 1;
-        } else if (*p == '"' || *p == '\\') {
+        else if (*p == '"' || *p == '\\')
             fprintf(out, "\\%c", *p);
-        } else if (*p < 0x20 || *p >= 0x7f) {
+        else
             fprintf(out, "\\u%04x", *p);
-        } else {
-            fputc(*p, out);
-        }
+        p += n > 0 ? n : 1;
     }
     fputc('"', out);
 }

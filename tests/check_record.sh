@@ -70,4 +70,11 @@ has unwritable "$tmp/out" "not written"
 has overwritten "$tmp/a.json" '"verdict":"rejected"'
 [ -z "$(ls "$tmp" | grep '\.tmp-')" ] && ok || bad "a temporary file was left behind"
 
+# Paths are bytes: in a record quote and backslash are escaped (RFC 8259 JSON strings), well-formed
+# UTF-8 is kept, a stray byte or a control byte becomes \u00XX (json_string writes runs whole).
+odd="$tmp/$(printf 'q"b\\\303\251\377\001x').graph"
+cp "$tmp/a.graph" "$odd"
+run odd-path 0 "$bin" check "$odd" "$tmp/a.cert" --record "$tmp/odd.json"
+has odd-path "$tmp/odd.json" "$(printf '"path":"%s/q\\"b\\\\\303\251\\u00ff\\u0001x.graph"' "$tmp")"
+
 finish record
