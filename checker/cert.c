@@ -180,11 +180,9 @@ static int need_line(parser *p, const char *expected)
 
 static int hex_value(char ch)
 {
-    if (ch >= '0' && ch <= '9')
-        return ch - '0';
-    if (ch >= 'a' && ch <= 'f')
-        return ch - 'a' + 10;
-    return -1;
+    static const char digits[16] = "0123456789abcdef";
+    const char *at = memchr(digits, ch, sizeof digits);
+    return at != NULL ? (int)(at - digits) : -1;
 }
 
 static int parse_hash(parser *p)
@@ -318,15 +316,11 @@ static int parse_planar_body(parser *p)
     int got;
     while ((got = lex_next_line(&p->lx)) == 1) {
         lex_take(&p->lx, &t);
-        if (lex_is(&t, "around")) {
-            if (parse_around(p) != 0)
-                return -1;
-        } else if (lex_is(&t, "point")) {
-            if (parse_point(p) != 0)
-                return -1;
-        } else {
+        int around = lex_is(&t, "around");
+        if (!around && !lex_is(&t, "point"))
             return lex_fail_token(&p->lx, PW_E_SYNTAX, "'around' or 'point'", &t);
-        }
+        if ((around ? parse_around(p) : parse_point(p)) != 0)
+            return -1;
     }
     return got;
 }
@@ -337,16 +331,11 @@ static int parse_nonplanar_body(parser *p)
     int got;
     const char *keyword = body_keyword(p->c->witness);
     while ((got = lex_next_line(&p->lx)) == 1) {
-        lex_take(&p->lx, &t);
-        if (keyword == NULL || !lex_is(&t, keyword)) {
-            char expected[32];
-            if (keyword == NULL)
-                snprintf(expected, sizeof expected, "end of file");
-            else
-                snprintf(expected, sizeof expected, "'%s'", keyword);
-            return lex_fail_token(&p->lx, PW_E_SYNTAX, expected, &t);
+        if (keyword == NULL) {
+            lex_take(&p->lx, &t);
+            return lex_fail_token(&p->lx, PW_E_SYNTAX, "end of file", &t);
         }
-        if (parse_body_line(p) != 0)
+        if (lex_expect(&p->lx, keyword) != 0 || parse_body_line(p) != 0)
             return -1;
     }
     return got;

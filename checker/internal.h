@@ -7,6 +7,8 @@
 
 #include "planewit.h"
 
+#include <string.h>
+
 /* Hard ceiling on N and M: dart ids (2m) and vertex ids must fit uint32_t. */
 #define PW_MAX_COUNT 2147483647u
 
@@ -31,11 +33,44 @@ typedef struct {
 void lex_init(pw_lexer *lx, const char *buf, size_t len, pw_file file, pw_verdict *v);
 /* Moves to the next line holding a token: 1 found, 0 end of file, -1 bad byte. */
 int lex_next_line(pw_lexer *lx);
-/* Takes the next token of the current line: 1 taken, 0 none left. */
-int lex_take(pw_lexer *lx, pw_token *t);
+/*
+ * The per-token steps are inline: the parsers take every number through them.
+ * They move a local cursor and store it once, since a store through lx->cur
+ * inside the loop would be redone per byte (a char may alias it).
+ */
+#define LEX_IS_BLANK(c) ((c) == ' ' || (c) == '\t')
+
 /* 1 when the current line has no token left. */
-int lex_at_end(pw_lexer *lx);
-int lex_is(const pw_token *t, const char *word);
+static inline int lex_at_end(pw_lexer *lx)
+{
+    const char *p = lx->cur;
+    while (p < lx->end && LEX_IS_BLANK(*p))
+        p++;
+    lx->cur = p;
+    return p == lx->end;
+}
+
+/* Takes the next token of the current line: 1 taken, 0 none left. */
+static inline int lex_take(pw_lexer *lx, pw_token *t)
+{
+    if (lex_at_end(lx))
+        return 0;
+    const char *p = lx->cur;
+    while (p < lx->end && !LEX_IS_BLANK(*p))
+        p++;
+    t->text = lx->cur;
+    t->len = (size_t)(p - lx->cur);
+    lx->cur = p;
+    return 1;
+}
+
+/* Comparing with a literal compiles to a few loads: no strlen or memcmp call. */
+static inline int lex_is(const pw_token *t, const char *word)
+{
+    size_t n = strlen(word);
+    return t->len == n && memcmp(t->text, word, n) == 0;
+}
+
 /* Each returns 0 on success, -1 with the verdict filled. */
 int lex_expect(pw_lexer *lx, const char *word);
 int lex_expect_end(pw_lexer *lx);

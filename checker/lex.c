@@ -12,43 +12,47 @@
 
 void lex_init(pw_lexer *lx, const char *buf, size_t len, pw_file file, pw_verdict *v)
 {
-    memset(lx, 0, sizeof *lx);
-    lx->buf = buf;
-    lx->len = len;
-    lx->file = file;
-    lx->v = v;
+    *lx = (pw_lexer){.buf = buf, .len = len, .file = file, .v = v};
 }
 
-static int is_blank(char c)
+/*
+ * Bit 7 set in each byte of the eight at p that is not ordinary (space to '~'
+ * but '#'), and perhaps in later ones: carries and borrows only run upwards
+ * from a byte that is flagged itself, so the lowest flag is exact.
+ */
+static uint64_t unusual8(const char *p)
 {
-    return c == ' ' || c == '\t';
+    uint64_t w, h, ones = 0x0101010101010101u;
+    memcpy(&w, p, 8);
+    h = w ^ 0x23 * ones;
+    return ((w - 0x20 * ones) | (w + ones) | w | ((h - ones) & ~h)) & 0x80 * ones;
 }
 
 /* Scans one physical line from lx->next; sets content bounds or reports a byte. */
 static int scan_line(pw_lexer *lx)
 {
-    const unsigned char *buf = (const unsigned char *)lx->buf;
-    size_t start = lx->next, i = start, content_end = SIZE_MAX;
-
+    const char *start = lx->buf + lx->next, *end = lx->buf + lx->len, *p = start, *content_end = NULL;
     lx->line++;
-    for (; i < lx->len; i++) {
-        unsigned char c = buf[i];
-        if ((c >= 0x20 && c <= 0x7e && c != '#') || c == '\t')
-            continue; /* the common case first: one test per ordinary byte */
+    for (; p < end; p++) {
+        uint64_t m = 0; /* eight ordinary bytes at a time, then straight to the first other one */
+        while (end - p >= 8 && (m = unusual8(p)) == 0)
+            p += 8;
+        p += m != 0 && __BYTE_ORDER__ == __ORDER_LITTLE_ENDIAN__ ? __builtin_ctzll(m) / 8 : 0;
+        unsigned char c = p < end ? (unsigned char)*p : '\n';
+        if ((unsigned char)(c - 0x20) < 0x5f && c != '#')
+            continue; /* the last few bytes of the file, or a big-endian machine */
         if (c == '\n')
             break;
-        if (c != '#' && !(c == '\r' && i + 1 < lx->len && buf[i + 1] == '\n'))
+        if (c != '#' && c != '\t' && !(c == '\r' && p + 1 < end && p[1] == '\n'))
             return pw_fail(lx->v, PW_E_BYTE, lx->file, lx->line,
                            "byte 0x%02x at column %zu is not allowed (ASCII text only)", c,
-                           i - start + 1);
-        if (content_end == SIZE_MAX)
-            content_end = i;
+                           (size_t)(p - start) + 1);
+        if (content_end == NULL && c != '\t')
+            content_end = p;
     }
-    if (content_end == SIZE_MAX)
-        content_end = i;
-    lx->cur = lx->buf + start;
-    lx->end = lx->buf + content_end;
-    lx->next = i < lx->len ? i + 1 : lx->len;
+    lx->cur = start;
+    lx->end = content_end != NULL ? content_end : p;
+    lx->next = p < end ? (size_t)(p - lx->buf) + 1 : lx->len;
     return 0;
 }
 
@@ -57,36 +61,10 @@ int lex_next_line(pw_lexer *lx)
     while (lx->next < lx->len) {
         if (scan_line(lx) != 0)
             return -1;
-        while (lx->cur < lx->end && is_blank(*lx->cur))
-            lx->cur++;
-        if (lx->cur < lx->end)
+        if (!lex_at_end(lx))
             return 1;
     }
     return 0;
-}
-
-int lex_at_end(pw_lexer *lx)
-{
-    while (lx->cur < lx->end && is_blank(*lx->cur))
-        lx->cur++;
-    return lx->cur == lx->end;
-}
-
-int lex_take(pw_lexer *lx, pw_token *t)
-{
-    if (lex_at_end(lx))
-        return 0;
-    t->text = lx->cur;
-    while (lx->cur < lx->end && !is_blank(*lx->cur))
-        lx->cur++;
-    t->len = (size_t)(lx->cur - t->text);
-    return 1;
-}
-
-int lex_is(const pw_token *t, const char *word)
-{
-    size_t n = strlen(word);
-    return t->len == n && memcmp(t->text, word, n) == 0;
 }
 
 int lex_fail_token(pw_lexer *lx, pw_code code, const char *expected, const pw_token *t)
@@ -112,9 +90,7 @@ int lex_expect(pw_lexer *lx, const char *word)
 int lex_expect_end(pw_lexer *lx)
 {
     pw_token t;
-    if (!lex_take(lx, &t))
-        return 0;
-    return lex_fail_token(lx, PW_E_SYNTAX, "end of line", &t);
+    return lex_take(lx, &t) ? lex_fail_token(lx, PW_E_SYNTAX, "end of line", &t) : 0;
 }
 
 /* Canonical unsigned decimal: "0" or a nonzero digit followed by digits. */
@@ -150,8 +126,19 @@ static int number_failure(pw_lexer *lx, int why, const char *what, const char *f
 int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
 {
     pw_token t;
-    if (!lex_take(lx, &t))
+    uint64_t value = 0;
+    const char *p;
+    if (lex_at_end(lx))
         return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
+    /* Fast path, one pass: up to nineteen digits (they always fit), then a blank or the end. */
+    for (p = lx->cur; p < lx->end && (unsigned)(*p - '0') <= 9 && p - lx->cur < 19; p++)
+        value = value * 10 + (unsigned)(*p - '0');
+    if ((p == lx->end || LEX_IS_BLANK(*p)) && (*lx->cur != '0' || p - lx->cur == 1)) {
+        lx->cur = p;
+        *out = value;
+        return 0;
+    }
+    lex_take(lx, &t);
     int why = digits_value(&t, out);
     return why == 0 ? 0 : number_failure(lx, why, what, "decimal digits, no sign, no leading zero",
                                            "that fits in 64 bits", &t);

@@ -98,7 +98,7 @@ static int match_list(rotation *r, const pw_item *it)
         return first_unlisted(r, it);
     for (uint32_t i = 0; i < deg; i++) {
         r->mark[g->ends[g->darts[g->first[v] + i] ^ 1u]] = PW_NONE;
-        r->next[list[i]] = list[(i + 1) % deg];
+        r->next[list[i]] = list[i + 1 < deg ? i + 1 : 0]; /* no division per dart */
     }
     return 0;
 }

@@ -21,6 +21,7 @@ typedef struct {
 typedef struct {
     cli_input text;  /* the list's bytes, cut into NUL-terminated paths */
     char *folder;    /* the list's folder, "" for the current one */
+    int dir;         /* that folder opened, for openat (a shorter path walk per file); -1 if not */
     batch_job *jobs;
     size_t count;
 } job_list;

@@ -68,7 +68,8 @@ static int read_job_file(const job_list *list, const char *listed, pw_file which
         unreadable(v, which, PW_E_READ, "cannot open: path too long");
         return -1;
     }
-    int fd = open(path, O_RDONLY | O_CLOEXEC);
+    int fd = list->dir >= 0 ? openat(list->dir, listed, O_RDONLY | O_CLOEXEC)
+                            : open(path, O_RDONLY | O_CLOEXEC);
     if (fd < 0) {
         int err = errno;
         snprintf(why, sizeof why, "cannot open: %s",

@@ -10,8 +10,10 @@
  */
 #include "batch.h"
 
+#include <fcntl.h>
 #include <stdlib.h>
 #include <string.h>
+#include <unistd.h>
 
 static int list_error(const char *list, uint64_t line, const char *what, const char *token)
 {
@@ -115,6 +117,7 @@ int job_list_read(job_list *list, const char *path, uint64_t max_bytes)
 {
     pw_limits lim;
     memset(list, 0, sizeof *list);
+    list->dir = -1;
     pw_limits_default(&lim);
     lim.max_bytes = max_bytes;
     if (cli_read_input(&list->text, path, &lim) != 0)
@@ -139,6 +142,7 @@ int job_list_read(job_list *list, const char *path, uint64_t max_bytes)
                 "[planar|nonplanar])\n", path);
         return -1;
     }
+    list->dir = open(list->folder[0] != '\0' ? list->folder : ".", O_RDONLY | O_DIRECTORY | O_CLOEXEC);
     return 0;
 }
 
@@ -147,7 +151,10 @@ void job_list_free(job_list *list)
     cli_free_input(&list->text);
     free(list->jobs);
     free(list->folder);
+    if (list->dir >= 0)
+        close(list->dir);
     memset(list, 0, sizeof *list);
+    list->dir = -1;
 }
 
 int job_list_resolve(const job_list *list, const char *listed, char *out, size_t size)
