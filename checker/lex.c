@@ -127,11 +127,11 @@ int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
 {
     pw_token t;
     uint64_t value = 0;
-    const char *p;
     if (lex_at_end(lx))
         return lex_fail_token(lx, PW_E_SYNTAX, what, NULL);
     /* Fast path, one pass: up to nineteen digits (they always fit), then a blank or the end. */
-    for (p = lx->cur; p < lx->end && (unsigned)(*p - '0') <= 9 && p - lx->cur < 19; p++)
+    const char *p = lx->cur, *stop = lx->end - p > 19 ? p + 19 : lx->end;
+    for (; p < stop && (unsigned)(*p - '0') <= 9; p++)
         value = value * 10 + (unsigned)(*p - '0');
     if ((p == lx->end || LEX_IS_BLANK(*p)) && (*lx->cur != '0' || p - lx->cur == 1)) {
         lx->cur = p;
