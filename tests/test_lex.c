@@ -40,6 +40,9 @@ static void accepts_missing_final_line_end(void **state)
     (void)state;
     assert_int_equal(PARSE("graph 2 1\n0 1", &v), PW_OK);
     assert_int_equal(PARSE("graph 2 1\n0 1\r\n", &v), PW_OK);
+    /* Lines are scanned eight bytes at a time: a last line of exactly 8 and 16 bytes. */
+    assert_int_equal(PARSE("graph 2 1\n0 1     ", &v), PW_OK);
+    assert_int_equal(PARSE("graph 2 1\n0       1       ", &v), PW_OK);
 }
 
 static void ignores_comments_blank_lines_and_tabs(void **state)
@@ -73,6 +76,15 @@ static void names_the_byte_and_column(void **state)
     (void)state;
     assert_int_equal(PARSE("graph 2 1\n0 \x01 1\n", &v), PW_E_BYTE);
     assert_string_equal(v.detail, "byte 0x01 at column 3 is not allowed (ASCII text only)");
+    /* The same past two whole eight-byte blocks, at each place of the third. */
+    for (size_t at = 17; at <= 24; at++) {
+        char text[40] = "graph 2 1\n0                        1\n";
+        text[10 + at - 1] = '\x7f';
+        assert_int_equal(parse_text(text, strlen(text), &v), PW_E_BYTE);
+        char want[64];
+        snprintf(want, sizeof want, "byte 0x7f at column %zu is not allowed (ASCII text only)", at);
+        assert_string_equal(v.detail, want);
+    }
 }
 
 static void refuses_non_canonical_numbers(void **state)
