@@ -323,6 +323,25 @@ static void read_error_is_not_an_empty_file(void **state)
     fclose(dir);
 }
 
+/* A file of exactly max_bytes bytes is read; one byte more is a limit (format-spec/limits.md). */
+static void byte_limit_is_inclusive(void **state)
+{
+    static const char text[] = "graph 1 0"; /* 9 bytes */
+    char *buf;
+    size_t len;
+    (void)state;
+    for (uint64_t max = 8; max <= 9; max++) {
+        FILE *f = tmpfile();
+        assert_non_null(f);
+        fputs(text, f);
+        rewind(f);
+        assert_int_equal(pw_read_all(f, max, &buf, &len), max == 9 ? PW_OK : PW_E_LIMIT);
+        assert_int_equal(len, max == 9 ? 9 : 0);
+        free(buf);
+        fclose(f);
+    }
+}
+
 /*
  * Malformed or borderline certificate lines: the rule, the line and the exact
  * detail, written from format-spec/certificate.md and format-spec/lexical.md
@@ -371,6 +390,11 @@ static const line_case line_cases[] = {
     /* a set index beyond 32 bits is kept as "no index" and refused by the check */
     {TRI, "certificate 1\nclaim nonplanar\nminor k5\nset 0 : 0\nset 1 : 1\nset 2 : 2\nset 3 : 0\n"
           "set 4294967296 : 1\n", PW_R_SET_INDEX, 8, "set indices must be 0 to 4, each once"},
+    /* a path step that is not an edge names both of its vertices, in path order */
+    {"graph 5 9\n0 2\n0 3\n0 4\n1 2\n1 3\n1 4\n2 3\n2 4\n3 4\n",
+     "certificate 1\nclaim nonplanar\nsubdivision k5 0 1 2 3 4\npath 0 2\npath 1 0\npath 0 3\n"
+     "path 0 4\npath 1 2\npath 1 3\npath 1 4\npath 2 3\npath 2 4\npath 3 4\n",
+     PW_R_PATH_NOT_EDGE, 5, "vertices 1 and 0 are consecutive on the path but not adjacent"},
     /* the earlier copy of a repeated pair is found wherever it is */
     {"graph 4 4\n0 2\n0 1\n2 3\n0 1\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 5,
      "edge 0 1 repeats the edge on line 3"},
@@ -427,6 +451,7 @@ int main(void)
         cmocka_unit_test(read_error_is_not_an_empty_file),
         cmocka_unit_test(malformed_lines_give_rule_line_and_detail),
         cmocka_unit_test(limits_default_as_documented),
+        cmocka_unit_test(byte_limit_is_inclusive),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
