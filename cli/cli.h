@@ -27,9 +27,10 @@ void cli_free_input(cli_input *in);
 
 /* For a process that runs one job on the graph file at graph_path: large
    blocks stay in the heap between phases, on huge pages where the system has
-   them (heap.c).  Call once, before reading; small or unusual inputs are left
-   to the defaults.  Changes speed only, never results. */
-void cli_heap_for_one_job(const char *graph_path);
+   them (heap.c).  Call once, before reading; small or unusual inputs, and
+   files above largest bytes, are left to the defaults.  Changes speed and
+   peak memory only, never results. */
+void cli_heap_for_one_job(const char *graph_path, uint64_t largest);
 
 /* An output written whole or not at all (output.c); path "-" is standard output. */
 typedef struct {

@@ -350,7 +350,7 @@ int cmd_draw(int argc, char **argv)
     memset(&j, 0, sizeof j);
     j.a = &a;
     j.info = a.cert && strcmp(a.cert, "-") == 0 ? stderr : stdout;
-    cli_heap_for_one_job(a.graph);
+    cli_heap_for_one_job(a.graph, UINT64_MAX);
     if (cli_read_input(&j.in, a.graph, &a.lim) != 0)
         return CLI_EXIT_USAGE;
     memset(&v, 0, sizeof v);

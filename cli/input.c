@@ -4,6 +4,48 @@
 #include <errno.h>
 #include <stdlib.h>
 #include <string.h>
+#include <sys/stat.h>
+
+/*
+ * A regular file of known size is read into one buffer of that size: the
+ * kernel's reader, which knows nothing of the size, grows its buffer by
+ * doubling, and with one heap for a large job (heap.c) every copy it leaves
+ * behind stays resident (about 15% of certify's peak at 10^6 edges).
+ * Returns 0 with *code set, or 1 when this way does not apply (not a regular
+ * file, empty as stat sees it, or a size other than stat said): the caller
+ * then reads the general way.
+ */
+static int read_sized(FILE *f, const pw_limits *lim, cli_input *in, pw_code *code)
+{
+    struct stat st;
+    if (fstat(fileno(f), &st) != 0 || !S_ISREG(st.st_mode) || st.st_size <= 0)
+        return 1;
+    if ((uint64_t)st.st_size > lim->max_bytes) {
+        *code = PW_E_LIMIT;
+        return 0;
+    }
+    size_t size = (size_t)st.st_size;
+    char *data = size < SIZE_MAX ? malloc(size + 1) : NULL;
+    if (data == NULL) {
+        *code = PW_E_NOMEM;
+        return 0;
+    }
+    size_t got = fread(data, 1, size + 1, f); /* one byte more: the end is seen */
+    if (ferror(f)) {
+        free(data);
+        *code = PW_E_READ;
+        return 0;
+    }
+    if (got != size) {
+        free(data);
+        rewind(f);
+        return 1;
+    }
+    in->bytes = data;
+    in->len = size;
+    *code = PW_OK;
+    return 0;
+}
 
 pw_code cli_read_input(cli_input *in, const char *path, const pw_limits *lim)
 {
@@ -16,7 +58,9 @@ pw_code cli_read_input(cli_input *in, const char *path, const pw_limits *lim)
         fprintf(stderr, "planewit: %s: cannot open: %s\n", path, strerror(errno));
         return PW_E_READ;
     }
-    pw_code code = pw_read_all(f, lim->max_bytes, &in->bytes, &in->len);
+    pw_code code = PW_OK;
+    if (from_stdin || read_sized(f, lim, in, &code) != 0)
+        code = pw_read_all(f, lim->max_bytes, &in->bytes, &in->len);
     if (!from_stdin)
         fclose(f);
     if (code == PW_OK)

@@ -34,10 +34,9 @@ typedef struct {
     unsigned char *side;    /* bipartite-edge-bound sides */
     uint32_t *queue;
     uint32_t side_room;
-    FILE *memory;           /* the certificate is rendered here */
-    char *cert;             /* ... and its bytes are here after prover_run */
-    size_t cert_size;
-    size_t cert_len;
+    char *cert;             /* the certificate is rendered here */
+    size_t cert_size;       /* room in cert */
+    size_t cert_len;        /* bytes of the last certificate */
 } prover;
 
 int prover_open(prover *p, witness_choice choice);

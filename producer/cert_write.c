@@ -2,8 +2,9 @@
  * cert_write.c - the certificate text: certify's, and draw's planar one
  * with its point lines (draw_cert.c).  At 10^7 edges the file has about
  * 2 * 10^7 numbers, so numbers are formatted by hand into a large buffer:
- * handed to stdio in big blocks, or for draw's text in memory, one buffer
- * sized up front from the counts, so the text is never copied.
+ * handed to stdio in big blocks, or, for the text certify and draw keep in
+ * memory, one buffer sized up front from the counts, so the text is never
+ * copied and its pages are touched once.
  */
 #include <stdlib.h>
 #include <string.h>
@@ -193,6 +194,54 @@ int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
 static size_t drawing_text_bound(const pw_graph *g)
 {
     return 200 + (size_t)g->n * (20 + 5 + 3 * NUMBER_ROOM + 3) + 2 * (size_t)g->m * NUMBER_ROOM;
+}
+
+/* Bytes of a vertex id with its space: ids are below n. */
+static size_t id_room(uint32_t n)
+{
+    size_t room = 2;
+    for (uint32_t x = n > 0 ? n - 1 : 0; x >= 10; x /= 10)
+        room++;
+    return room;
+}
+
+/*
+ * The longest text the counts allow: header lines (with the room make_room
+ * asks beyond the last number), then an around line of "around v :" and a
+ * number per dart, or the branch vertices and the path numbers.
+ */
+static size_t cert_text_bound(const pw_graph *g, const pp_result *r)
+{
+    size_t id = id_room(g->n), fixed = 200 + NUMBER_ROOM;
+    if (r->kind == PP_PLANAR)
+        return fixed + (size_t)g->n * (9 + id) + 2 * (size_t)g->m * id;
+    return fixed + 10 * (5 + 1) + (6 + (size_t)r->path_start[pp_path_count(r)]) * id;
+}
+
+int pp_cert_text(const pw_graph *g, const pp_result *r, const unsigned char *graph_sha256,
+                 char **buf, size_t *cap, size_t *len)
+{
+    size_t bound = cert_text_bound(g, r);
+    if (bound < OUT_BUFFER)
+        bound = OUT_BUFFER;
+    *len = 0;
+    if (*buf == NULL || *cap < bound) {
+        free(*buf); /* nothing to keep: a plain malloc, not a copying realloc */
+        *cap = 0;
+        if ((*buf = malloc(bound)) == NULL)
+            return -1;
+        *cap = bound;
+    }
+    writer w = {NULL, *buf, 0, *cap, 0};
+    put_header(&w, graph_sha256);
+    if (r->kind == PP_PLANAR)
+        put_rotation(&w, g, r->rot);
+    else
+        put_subdivision(&w, r);
+    *buf = w.buf;
+    *cap = w.cap;
+    *len = w.failed ? 0 : w.len;
+    return w.failed ? -1 : 0;
 }
 
 int pp_drawing_cert_text(const pw_graph *g, const uint32_t *rot, const int64_t *x,

@@ -44,6 +44,14 @@ unsigned pp_path_count(const pp_result *r);
 int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
                   const unsigned char *graph_sha256);
 
+/* The same text into memory: *buf (room for *cap bytes, NULL and 0 at
+   first) is reused when large enough for what the counts allow, else
+   replaced, so a stream of graphs keeps one buffer; *len is the text's
+   length.  Returns 0, or -1 when memory runs out (*buf stays the caller's
+   to free). */
+int pp_cert_text(const pw_graph *g, const pp_result *r, const unsigned char *graph_sha256,
+                 char **buf, size_t *cap, size_t *len);
+
 /* A planar certificate with coordinates, into a fresh buffer the caller
    frees: rot's around lines, then a point line (x[v], y[v]) for every vertex
    v.  Returns 0, or -1 when memory runs out (*text NULL). */
