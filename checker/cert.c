@@ -217,7 +217,7 @@ static int parse_preamble(parser *p)
                        "expected format version 1, found '%llu'", (unsigned long long)version);
     if (lex_expect_end(&p->lx) != 0 || need_line(p, "'claim'") != 0)
         return -1;
-    lex_take(&p->lx, &t); /* need_line found a line with a token */
+    t = lex_first(&p->lx);
     if (lex_is(&t, "graph-sha256")) {
         if (parse_hash(p) != 0 || need_line(p, "'claim'") != 0)
             return -1;
@@ -263,7 +263,7 @@ static int parse_head(parser *p)
     if (need_line(p, "a witness line") != 0)
         return -1;
     c->head_line = p->lx.line;
-    lex_take(&p->lx, &t);
+    t = lex_first(&p->lx);
     if (lex_is(&t, "subdivision"))
         return parse_kind(p, PW_WITNESS_SUBDIVISION_K5, PW_WITNESS_SUBDIVISION_K33) != 0
                    ? -1
@@ -315,7 +315,7 @@ static int parse_planar_body(parser *p)
     pw_token t;
     int got;
     while ((got = lex_next_line(&p->lx)) == 1) {
-        lex_take(&p->lx, &t);
+        t = lex_first(&p->lx);
         int around = lex_is(&t, "around");
         if (!around && !lex_is(&t, "point"))
             return lex_fail_token(&p->lx, PW_E_SYNTAX, "'around' or 'point'", &t);
@@ -332,7 +332,7 @@ static int parse_nonplanar_body(parser *p)
     const char *keyword = body_keyword(p->c->witness);
     while ((got = lex_next_line(&p->lx)) == 1) {
         if (keyword == NULL) {
-            lex_take(&p->lx, &t);
+            t = lex_first(&p->lx);
             return lex_fail_token(&p->lx, PW_E_SYNTAX, "end of file", &t);
         }
         if (lex_expect(&p->lx, keyword) != 0 || parse_body_line(p) != 0)

@@ -64,6 +64,14 @@ static inline int lex_take(pw_lexer *lx, pw_token *t)
     return 1;
 }
 
+/* The first token of a line that lex_next_line() has just found: there is one. */
+static inline pw_token lex_first(pw_lexer *lx)
+{
+    pw_token t = {lx->cur, 0};
+    lex_take(lx, &t);
+    return t;
+}
+
 /* Comparing with a literal compiles to a few loads: no strlen or memcmp call. */
 static inline int lex_is(const pw_token *t, const char *word)
 {

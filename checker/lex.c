@@ -138,7 +138,7 @@ int lex_uint(pw_lexer *lx, const char *what, uint64_t *out)
         *out = value;
         return 0;
     }
-    lex_take(lx, &t);
+    t = lex_first(lx); /* lex_at_end() said there is a token */
     int why = digits_value(&t, out);
     return why == 0 ? 0 : number_failure(lx, why, what, "decimal digits, no sign, no leading zero",
                                            "that fits in 64 bits", &t);

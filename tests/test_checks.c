@@ -398,6 +398,9 @@ static const line_case line_cases[] = {
     /* the earlier copy of a repeated pair is found wherever it is */
     {"graph 4 4\n0 2\n0 1\n2 3\n0 1\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 5,
      "edge 0 1 repeats the edge on line 3"},
+    /* an earlier edge that starts at the pair's second vertex is not mistaken for it */
+    {"graph 3 3\n1 2\n0 1\n0 1\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
+     "edge 0 1 repeats the edge on line 3"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},
