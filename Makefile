@@ -115,7 +115,7 @@ help:
 
 # ---- Hardening: sanitizers, valgrind, coverage, fuzzing, lint, mutation -----
 # Results and how to read them: bench/results-hardening.md.  `make help-hardening`.
-.PHONY: sanitize sanitize-replay valgrind coverage coverage-enforce fuzz fuzz-afl fault-injection \
+.PHONY: sanitize sanitize-replay valgrind coverage coverage-enforce fuzz fuzz-long fuzz-afl fault-injection \
         differential lint mutate help-hardening
 SAN_FLAGS    := -O1 -g -fno-omit-frame-pointer -fsanitize=address,undefined -fno-sanitize-recover=all
 HARD_CFLAGS  := $(CSTD) $(WARN) $(CRYPTO_CFLAGS) -Ichecker -Icli -Itests/fuzz -Itests
@@ -224,6 +224,12 @@ FUZZ_SECONDS ?= 60
 FUZZ_RECOVER ?=
 fuzz:
 	sh tests/fuzz/run.sh $(FUZZ_SECONDS)
+# One long run per harness, bounded by CPU time at nice 19 (tests/fuzz/long.sh):
+# make fuzz-long FUZZ_TARGETS="graph cert" FUZZ_CPU_SECONDS=3600
+FUZZ_TARGETS ?= graph cert check import differential certify
+FUZZ_CPU_SECONDS ?= 3600
+fuzz-long:
+	@for t in $(FUZZ_TARGETS); do sh tests/fuzz/long.sh $$t $(FUZZ_CPU_SECONDS) || exit 1; done
 build-fuzz/fuzz_%: $(HARD_DEPS)
 	@mkdir -p $(dir $@)
 	$(FUZZ_CC) $(HARD_CFLAGS) $(SAN_FLAGS) $(FUZZ_RECOVER) -fsanitize=fuzzer -o $@ \
@@ -251,6 +257,7 @@ help-hardening:
 	@echo "make coverage          gcovr line/branch coverage of checker/ by the suite"
 	@echo "make coverage-enforce  the same, failing below 100% lines / 95% branches"
 	@echo "make fuzz FUZZ_SECONDS=N  each libFuzzer harness for N seconds"
+	@echo "make fuzz-long         one run per harness until FUZZ_CPU_SECONDS of CPU (default 3600)"
 	@echo "make fuzz-afl          build the harnesses for AFL++ into build-afl/"
 	@echo "make fault-injection   fail every allocation in turn over the vectors"
 	@echo "make differential      kernel vs the independent oracle on mutated vectors"
