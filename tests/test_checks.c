@@ -401,6 +401,12 @@ static const line_case line_cases[] = {
     /* an earlier edge that starts at the pair's second vertex is not mistaken for it */
     {"graph 3 3\n1 2\n0 1\n0 1\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 0 1 repeats the edge on line 3"},
+    /* a token of exactly 32 bytes is shown whole, without "..." (format-spec/lexical.md) */
+    {TRI, "certificate 1\nclaim abcdefghijklmnopqrstuvwxyz012345\n", PW_E_SYNTAX, 2,
+     "expected 'planar' or 'nonplanar', found 'abcdefghijklmnopqrstuvwxyz012345'"},
+    /* 2^64 where a vertex id is expected */
+    {TRI, "certificate 1\nclaim planar\naround 18446744073709551616 : 1\n", PW_E_RANGE, 3,
+     "expected a vertex id that fits in 64 bits, found '18446744073709551616'"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},
