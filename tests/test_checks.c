@@ -407,6 +407,17 @@ static const line_case line_cases[] = {
     /* 2^64 where a vertex id is expected */
     {TRI, "certificate 1\nclaim planar\naround 18446744073709551616 : 1\n", PW_E_RANGE, 3,
      "expected a vertex id that fits in 64 bits, found '18446744073709551616'"},
+    /* one around line is counted in the singular */
+    {TRI, "certificate 1\nclaim planar\naround 0 : 1 2\n", PW_R_AROUND_COUNT, 0,
+     "1 around line for 3 vertices"},
+    /* the missing neighbour of vertex 0 is found after its listed ones */
+    {"graph 4 6\n0 1\n0 2\n0 3\n1 2\n1 3\n2 3\n",
+     "certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 0 2 3\naround 2 : 0 1 3\naround 3 : 0 1 2\n",
+     PW_R_NEIGHBOUR_MISSING, 3, "vertex 0 does not list its neighbour 3"},
+    /* an around list naming vertex n_adj (the first id no edge uses) */
+    {"graph 6 3\n0 1\n1 2\n2 0\n",
+     "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 2 0\naround 2 : 0 1\naround 3 :\n"
+     "around 4 :\naround 5 :\n", PW_R_NOT_NEIGHBOUR, 3, "vertex 0 lists 3, which is not its neighbour"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},
