@@ -450,6 +450,39 @@ static void limits_default_as_documented(void **state)
     assert_int_equal(lim.max_edges, 300000000u);
 }
 
+/* The graph parser alone: its failures (rule, line, detail) and the counts it reports. */
+static void graph_parser_reports_where_and_what(void **state)
+{
+    static const struct {
+        const char *text;
+        pw_code code;
+        uint64_t line;
+        const char *detail;
+    } cases[] = {
+        /* at end of file, one past the last line read (format-spec/lexical.md) */
+        {"# nothing here\n", PW_E_SYNTAX, 2, "expected 'graph N M', found end of file"},
+        {"graph 3 1\n0 3\n", PW_E_RANGE, 2, "vertex 3 is out of range: ids run from 0 to N - 1 = 2"},
+        {"graph 3 1\n0 2\n", PW_OK, 0, ""},
+    };
+    (void)state;
+    for (size_t i = 0; i < sizeof cases / sizeof cases[0]; i++) {
+        pw_graph g;
+        pw_verdict v;
+        pw_limits lim;
+        pw_limits_default(&lim);
+        pw_verdict_init(&v);
+        assert_int_equal(pw_graph_parse(cases[i].text, strlen(cases[i].text), &lim, &g, &v),
+                         cases[i].code);
+        assert_int_equal(v.line, cases[i].line);
+        assert_string_equal(v.detail, cases[i].detail);
+        if (cases[i].code == PW_OK) {
+            assert_int_equal(v.vertices, 3);
+            assert_int_equal(v.edges, 1);
+        }
+        pw_graph_free(&g);
+    }
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
@@ -472,6 +505,7 @@ int main(void)
         cmocka_unit_test(malformed_lines_give_rule_line_and_detail),
         cmocka_unit_test(limits_default_as_documented),
         cmocka_unit_test(byte_limit_is_inclusive),
+        cmocka_unit_test(graph_parser_reports_where_and_what),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
