@@ -67,35 +67,8 @@ static int find_bound(prover *p, const pw_graph *g)
 /* The edge-count witness's text; -1 when memory runs out. */
 static int write_bound(prover *p, const pw_graph *g, const unsigned char *sha)
 {
-    size_t need = 256 + 2 * (size_t)g->n;
-    if (p->cert_size < need) {
-        free(p->cert); /* nothing in it to keep */
-        p->cert_size = 0;
-        if ((p->cert = malloc(need)) == NULL)
-            return -1;
-        p->cert_size = need;
-    }
-    char hex[65] = "";
-    const char *kind = p->kind == PW_WITNESS_EDGE_BOUND ? "edge-bound\n" : "bipartite-edge-bound\n";
-    if (sha != NULL)
-        cli_sha256_hex(sha, hex);
-    int n = snprintf(p->cert, p->cert_size, "certificate 1\n%s%s%sclaim nonplanar\n%s",
-                     sha != NULL ? "graph-sha256 " : "", sha != NULL ? hex : "",
-                     sha != NULL ? "\n" : "", kind);
-    if (n < 0)
-        return -1;
-    size_t len = (size_t)n;
-    if (p->kind == PW_WITNESS_BIPARTITE_BOUND) {
-        memcpy(p->cert + len, "side :", 6);
-        len += 6;
-        for (uint32_t v = 0; v < g->n; v++) {
-            p->cert[len++] = ' ';
-            p->cert[len++] = p->side[v] ? '1' : '0';
-        }
-        p->cert[len++] = '\n';
-    }
-    p->cert_len = len;
-    return 0;
+    const unsigned char *side = p->kind == PW_WITNESS_BIPARTITE_BOUND ? p->side : NULL;
+    return pp_bound_text(g, side, sha, &p->cert, &p->cert_size, &p->cert_len);
 }
 
 static pw_witness kind_of(const pp_result *r)

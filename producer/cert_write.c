@@ -218,52 +218,85 @@ static size_t cert_text_bound(const pw_graph *g, const pp_result *r)
     return fixed + 10 * (5 + 1) + (6 + (size_t)r->path_start[pp_path_count(r)]) * id;
 }
 
-int pp_cert_text(const pw_graph *g, const pp_result *r, const unsigned char *graph_sha256,
-                 char **buf, size_t *cap, size_t *len)
+/* A writer over *buf, which is replaced by a fresh block when it holds fewer
+   than `bound` bytes (at least OUT_BUFFER): nothing in it is kept, so a plain
+   malloc, not a copying realloc. */
+static int memory_writer(writer *w, char **buf, size_t *cap, size_t bound)
 {
-    size_t bound = cert_text_bound(g, r);
     if (bound < OUT_BUFFER)
         bound = OUT_BUFFER;
-    *len = 0;
     if (*buf == NULL || *cap < bound) {
-        free(*buf); /* nothing to keep: a plain malloc, not a copying realloc */
+        free(*buf);
         *cap = 0;
         if ((*buf = malloc(bound)) == NULL)
             return -1;
         *cap = bound;
     }
-    writer w = {NULL, *buf, 0, *cap, 0};
+    *w = (writer){NULL, *buf, 0, *cap, 0};
+    return 0;
+}
+
+/* Hands a memory writer's buffer (perhaps grown) back, with the text's length. */
+static int memory_done(const writer *w, char **buf, size_t *cap, size_t *len)
+{
+    *buf = w->buf;
+    *cap = w->cap;
+    *len = w->failed ? 0 : w->len;
+    return w->failed ? -1 : 0;
+}
+
+int pp_cert_text(const pw_graph *g, const pp_result *r, const unsigned char *graph_sha256,
+                 char **buf, size_t *cap, size_t *len)
+{
+    writer w;
+    *len = 0;
+    if (memory_writer(&w, buf, cap, cert_text_bound(g, r)) != 0)
+        return -1;
     put_header(&w, graph_sha256);
     if (r->kind == PP_PLANAR)
         put_rotation(&w, g, r->rot);
     else
         put_subdivision(&w, r);
-    *buf = w.buf;
-    *cap = w.cap;
-    *len = w.failed ? 0 : w.len;
-    return w.failed ? -1 : 0;
+    return memory_done(&w, buf, cap, len);
+}
+
+int pp_bound_text(const pw_graph *g, const unsigned char *side, const unsigned char *graph_sha256,
+                  char **buf, size_t *cap, size_t *len)
+{
+    writer w;
+    *len = 0;
+    if (memory_writer(&w, buf, cap, 256 + 2 * (size_t)g->n) != 0)
+        return -1;
+    put_header(&w, graph_sha256);
+    put_text(&w, side == NULL ? "claim nonplanar\nedge-bound\n"
+                              : "claim nonplanar\nbipartite-edge-bound\nside :");
+    if (side != NULL) {
+        for (uint32_t v = 0; v < g->n; v++)
+            put_text(&w, side[v] ? " 1" : " 0");
+        put_text(&w, "\n");
+    }
+    return memory_done(&w, buf, cap, len);
 }
 
 int pp_drawing_cert_text(const pw_graph *g, const uint32_t *rot, const int64_t *x,
                          const int64_t *y, const unsigned char *graph_sha256, char **text,
                          size_t *len)
 {
-    size_t bound = drawing_text_bound(g);
-    writer w = {NULL, malloc(bound > OUT_BUFFER ? bound : OUT_BUFFER), 0,
-                bound > OUT_BUFFER ? bound : OUT_BUFFER, 0};
+    char *buf = NULL;
+    size_t cap = 0;
+    writer w;
     *text = NULL;
     *len = 0;
-    if (w.buf == NULL)
+    if (memory_writer(&w, &buf, &cap, drawing_text_bound(g)) != 0)
         return -1;
     put_header(&w, graph_sha256);
     put_rotation(&w, g, rot);
     put_points(&w, g->n, x, y);
-    if (w.failed) {
-        free(w.buf);
+    if (memory_done(&w, &buf, &cap, len) != 0) {
+        free(buf);
         return -1;
     }
-    char *fitted = realloc(w.buf, w.len + 1); /* give back the unused room */
-    *text = fitted != NULL ? fitted : w.buf;
-    *len = w.len;
+    char *fitted = realloc(buf, *len + 1); /* give back the unused room */
+    *text = fitted != NULL ? fitted : buf;
     return 0;
 }

@@ -52,6 +52,11 @@ int pp_write_cert(FILE *out, const pw_graph *g, const pp_result *r,
 int pp_cert_text(const pw_graph *g, const pp_result *r, const unsigned char *graph_sha256,
                  char **buf, size_t *cap, size_t *len);
 
+/* The same for the edge-count witnesses: edge-bound when side is NULL, else
+   bipartite-edge-bound with side[v] (0 or 1) for each of the N vertices. */
+int pp_bound_text(const pw_graph *g, const unsigned char *side, const unsigned char *graph_sha256,
+                  char **buf, size_t *cap, size_t *len);
+
 /* A planar certificate with coordinates, into a fresh buffer the caller
    frees: rot's around lines, then a point line (x[v], y[v]) for every vertex
    v.  Returns 0, or -1 when memory runs out (*text NULL). */
