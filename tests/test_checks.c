@@ -418,6 +418,12 @@ static const line_case line_cases[] = {
     {"graph 6 3\n0 1\n1 2\n2 0\n",
      "certificate 1\nclaim planar\naround 0 : 1 2 3\naround 1 : 2 0\naround 2 : 0 1\naround 3 :\n"
      "around 4 :\naround 5 :\n", PW_R_NOT_NEIGHBOUR, 3, "vertex 0 lists 3, which is not its neighbour"},
+    /* the first id beyond N is named, whichever line holds it (check.c's vertex-range text) */
+    {TRI, "certificate 1\nclaim planar\naround 0 : 1 2\naround 1 : 2 9 0\naround 2 : 0 1\n",
+     PW_R_VERTEX_RANGE, 4, "vertex 9 is not in the graph (N = 3)"},
+    /* a line after a head that takes none names the token it found (format-spec/lexical.md) */
+    {TRI, "certificate 1\nclaim nonplanar\nedge-bound\nside : 0 1\n", PW_E_SYNTAX, 4,
+     "expected end of file, found 'side'"},
     /* a repeat written the other way round still names the earlier line */
     {"graph 3 3\n0 1\n0 2\n1 0\n", "certificate 1\nclaim planar\n", PW_E_REPEATED_EDGE, 4,
      "edge 1 0 repeats the edge on line 2"},

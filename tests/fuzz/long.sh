@@ -5,7 +5,9 @@
 # The harness runs under `nice -n 19` on build-fuzz/corpus/TARGET (kept between
 # runs) plus the seeds; when its user + system time reaches CPU_SECONDS it is
 # interrupted (SIGINT, so libFuzzer prints its final statistics).  The last line
-# of build-fuzz/long-TARGET.txt is the summary for bench/results-hardening.md.
+# of build-fuzz/long-TARGET.txt is the summary for bench/results-hardening.md;
+# every run's summary is also appended to build-fuzz/long-history.txt, since a
+# campaign is usually several runs resuming one corpus.
 set -u
 t=$1
 limit=$2
@@ -48,3 +50,4 @@ files=$(ls "$out/corpus/$t" | wc -l)
 finds=$(ls "$out/findings/$t" | wc -l)
 echo "target=$t start=$start end=$(date -u +%Y-%m-%dT%H:%M:%SZ) cpu_seconds=$cpu executions=${execs:-?} corpus_files=$files cov_edges=${cov:-?} features=${ft:-?} findings=$finds exit=$rc" \
     | tee "$out/long-$t.txt"
+cat "$out/long-$t.txt" >>"$out/long-history.txt"
