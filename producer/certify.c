@@ -36,6 +36,8 @@ static void *alloc_large(size_t bytes)
 static void release(pp_state *s, pp_memory *mem)
 {
     free(mem->block);
+    free(s->dfi_of);
+    s->dfi_of = NULL;
     free(mem->flipped);
     free(s->nxt);
     free(s->prv);
@@ -47,27 +49,32 @@ static void release(pp_state *s, pp_memory *mem)
     s->nxt = s->prv = NULL;
 }
 
-/* Carves the per-vertex arrays out of one block: 18 words per vertex. */
+/*
+ * Carves the per-vertex arrays out of one block: 17 words per vertex.  dfi_of
+ * is apart, because only the search and the witness search use it: it is
+ * freed before the run, whose arrays make the run's peak memory.
+ */
 static int allocate(pp_state *s, pp_memory *mem, const pw_graph *g)
 {
     size_t n = g->n_adj, darts = 2 * (size_t)g->m;
     memset(s, 0, sizeof *s);
     s->g = g;
     s->n = g->n_adj;
-    mem->block = alloc_large((18 * n + 1) * sizeof(uint32_t));
+    mem->block = alloc_large((17 * n + 1) * sizeof(uint32_t));
     mem->flipped = malloc(n + 1);
+    s->dfi_of = alloc_large((n + 1) * sizeof(uint32_t));
     s->nxt = alloc_large((darts + 1) * sizeof(uint32_t));
     s->prv = alloc_large((darts + 1) * sizeof(uint32_t));
     s->tgt = alloc_large((darts + 1) * sizeof(uint32_t));
-    if (mem->block == NULL || mem->flipped == NULL || s->nxt == NULL || s->prv == NULL ||
-        s->tgt == NULL) {
+    if (mem->block == NULL || mem->flipped == NULL || s->dfi_of == NULL || s->nxt == NULL ||
+        s->prv == NULL || s->tgt == NULL) {
         release(s, mem);
         return PP_ERR_NOMEM;
     }
     uint32_t *p = mem->block;
-    uint32_t **one[] = {&s->vertex_of, &s->dfi_of,    &s->parent,    &s->lowpoint,
-                        &s->least_anc, &s->back_dart, &s->pert_tail, &s->pert_next,
-                        &s->sep_head,  &s->sep_next};
+    uint32_t **one[] = {&s->vertex_of, &s->parent,    &s->lowpoint,  &s->least_anc,
+                        &s->back_dart, &s->pert_tail, &s->pert_next, &s->sep_head,
+                        &s->sep_next};
     for (size_t i = 0; i < sizeof one / sizeof one[0]; i++, p += n)
         *one[i] = p;
     s->head = p;
@@ -93,6 +100,17 @@ static int certify_planar(pp_state *s, pp_result *r)
     return 0;
 }
 
+/* The witness search maps ids to DFIs again: the inverse of vertex_of. */
+static int isolate(pp_state *s, pp_run_outcome why, uint32_t v, uint32_t root, pp_result *r)
+{
+    s->dfi_of = malloc(((size_t)s->n + 1) * sizeof(uint32_t));
+    if (s->dfi_of == NULL)
+        return PP_ERR_NOMEM;
+    for (uint32_t x = 0; x < s->n; x++)
+        s->dfi_of[s->vertex_of[x]] = x;
+    return pp_isolate(s, why, v, root, r);
+}
+
 int pp_certify(const pw_graph *g, pp_result *r)
 {
     memset(r, 0, sizeof *r);
@@ -103,6 +121,8 @@ int pp_certify(const pw_graph *g, pp_result *r)
     if (allocate(&s, &mem, g) != 0)
         return PP_ERR_NOMEM;
     pp_dfs(&s, s.back_dart, s.pert_next); /* scratch: both are reset before the run */
+    free(s.dfi_of);
+    s.dfi_of = NULL;
     pp_sort_children(&s, s.visited, s.visited + s.n);
     pp_prepare_run(&s);
     uint32_t v = 0, root = PP_NIL;
@@ -111,7 +131,7 @@ int pp_certify(const pw_graph *g, pp_result *r)
     s.tgt = NULL;
     int got = why == PP_RUN_PLANAR  ? certify_planar(&s, r)
               : why == PP_RUN_NOMEM ? PP_ERR_NOMEM
-                                    : pp_isolate(&s, why, v, root, r);
+                                    : isolate(&s, why, v, root, r);
     release(&s, &mem);
     if (got != 0)
         pp_result_free(r);

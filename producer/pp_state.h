@@ -39,7 +39,7 @@ typedef struct {
     const pw_graph *g;
     uint32_t n;          /* g->n_adj: the vertices that have adjacency */
     uint32_t *vertex_of; /* DFI -> original id */
-    uint32_t *dfi_of;    /* original id -> DFI */
+    uint32_t *dfi_of;    /* original id -> DFI; NULL during the run (certify.c) */
     uint32_t *parent;    /* DFI of the DFS parent, PP_NIL for a root */
     uint32_t *lowpoint;  /* least DFI reachable by tree edges down, then one back edge */
     uint32_t *least_anc; /* least DFI joined to x by a back edge, or x itself */
