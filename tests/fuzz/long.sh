@@ -1,9 +1,7 @@
 #!/bin/sh
 # Long fuzz run of one libFuzzer harness, bounded by CPU time rather than wall
 # time, so that a run at low priority on a busy machine still gets its full share.
-# Usage: tests/fuzz/long.sh TARGET CPU_SECONDS [TAG]   (from the repository root)
-# TAG (e.g. -2) names a second instance on the same corpus, run at the same time on
-# another core; its logs are build-fuzz/long-TARGET-2.*.
+# Usage: tests/fuzz/long.sh TARGET CPU_SECONDS      (from the repository root)
 # The harness runs under `nice -n 19` on build-fuzz/corpus/TARGET (kept between
 # runs) plus the seeds; when its user + system time reaches CPU_SECONDS it is
 # interrupted (SIGINT, so libFuzzer prints its final statistics).  The last line
@@ -13,13 +11,12 @@
 set -u
 t=$1
 limit=$2
-tag=${3:-}
 out=build-fuzz
 /usr/bin/python3 tests/fuzz/seeds.py "$out/seeds" >/dev/null || exit 2
 make --no-print-directory "$out/fuzz_$t" >"$out/build-$t.log" 2>&1 || { echo "fuzz $t: NOT BUILT"; exit 2; }
 mkdir -p "$out/corpus/$t" "$out/findings/$t" "$out/seeds/$t"
 [ -d "tests/fuzz/regressions/$t" ] && cp tests/fuzz/regressions/$t/* "$out/seeds/$t/"
-log="$out/long-$t$tag.log"
+log="$out/long-$t.log"
 # The timeout is wall time: at nice 19 a busy machine can starve a harness for
 # many seconds (a 10 s limit once flagged an input that replays in 0.1 s), so a
 # long run allows 120 s and still catches a real hang; slow-unit reports (also
@@ -51,6 +48,6 @@ cov=$(grep -o 'cov: [0-9]*' "$log" | tail -n 1 | cut -d' ' -f2)
 ft=$(grep -o 'ft: [0-9]*' "$log" | tail -n 1 | cut -d' ' -f2)
 files=$(ls "$out/corpus/$t" | wc -l)
 finds=$(ls "$out/findings/$t" | wc -l)
-echo "target=$t$tag start=$start end=$(date -u +%Y-%m-%dT%H:%M:%SZ) cpu_seconds=$cpu executions=${execs:-?} corpus_files=$files cov_edges=${cov:-?} features=${ft:-?} findings=$finds exit=$rc" \
-    | tee "$out/long-$t$tag.txt"
-cat "$out/long-$t$tag.txt" >>"$out/long-history.txt"
+echo "target=$t start=$start end=$(date -u +%Y-%m-%dT%H:%M:%SZ) cpu_seconds=$cpu executions=${execs:-?} corpus_files=$files cov_edges=${cov:-?} features=${ft:-?} findings=$finds exit=$rc" \
+    | tee "$out/long-$t.txt"
+cat "$out/long-$t.txt" >>"$out/long-history.txt"
