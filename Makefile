@@ -26,7 +26,7 @@ SUPPORT_OBJ  := $(TEST_SUPPORT:%.c=$(BUILD)/%.o)
 LIBKERNEL := $(BUILD)/libplanewit-check.a
 BIN       := $(BUILD)/planewit
 
-.PHONY: all check test kernel-size clean help demo qualify bench-batch bench-draw bench-geng10 bench-certify
+.PHONY: all check test kernel-size clean help demo qualify bench-batch bench-draw bench-geng10 bench-certify bench-certify-bound
 all: $(BIN) kernel-size
 
 $(BUILD)/%.o: %.c
@@ -63,7 +63,7 @@ kernel-size:
 	  "$$(sh scripts/count-sloc.sh checker)"
 
 check test: $(BIN) $(TEST_BINS)
-	@sh tests/run-all.sh $(BUILD)
+	@BUILD_CC="$(CC)" BUILD_OPT="$(OPT)" sh tests/run-all.sh $(BUILD)
 
 demo: $(BIN)
 	@sh examples/run-demo.sh $(BIN)
@@ -96,6 +96,11 @@ bench-check: $(BIN)
 bench-certify: $(BIN) $(LIBKERNEL)
 	sh bench/certify_bench.sh $(BUILD)
 
+# What bounds certify's time: floors (a bare depth-first search on the same files)
+# and instructions per edge under callgrind (bench/results-certify-bound.md).
+bench-certify-bound: $(BIN) $(LIBKERNEL)
+	sh bench/certify_bound.sh $(BUILD)
+
 clean:
 	rm -rf $(BUILD)
 
@@ -107,6 +112,7 @@ help:
 	@echo "make bench-batch  batch throughput benchmark, results in bench/results-batch.md"
 	@echo "make bench-check  drawing check vs Boost, results in bench/results-check.md"
 	@echo "make bench-certify  certify vs Boost and networkx, 10^4-10^7 edges, bench/results-certify.md"
+	@echo "make bench-certify-bound  certify beside its floors, instructions per edge, bench/results-certify-bound.md"
 	@echo "make bench-geng10 all 12,005,168 graphs on 10 vertices through certify, bench/results-geng10.md"
 	@echo "make bench-draw   drawing at 10^6 edges vs Boost, results in bench/results-draw.md"
 	@echo "make clean      remove $(BUILD)/"

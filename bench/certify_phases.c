@@ -13,6 +13,7 @@
  * and each phase's own peak resident memory in KiB (hwm_PHASE; Linux only,
  * -1 elsewhere), which shows where the whole run's peak comes from.
  */
+#include "bench_util.h"
 #include "certify.h"
 #include "planewit.h"
 
@@ -20,29 +21,6 @@
 #include <stdlib.h>
 #include <string.h>
 #include <time.h>
-
-static double now(void)
-{
-    struct timespec t;
-    clock_gettime(CLOCK_MONOTONIC, &t);
-    return (double)t.tv_sec + (double)t.tv_nsec * 1e-9;
-}
-
-static void fail(const char *what)
-{
-    fprintf(stderr, "certify_phases: %s\n", what);
-    exit(2);
-}
-
-static char *slurp(const char *path, size_t *len)
-{
-    FILE *f = fopen(path, "rb");
-    char *buf = NULL;
-    if (f == NULL || pw_read_all(f, UINT64_MAX, &buf, len) != PW_OK)
-        fail("cannot read the graph");
-    fclose(f);
-    return buf;
-}
 
 /*
  * The peak resident size (KiB) since the last call.  Writing 5 to clear_refs
@@ -78,7 +56,7 @@ static void witness_size(const pw_graph *g, const pp_result *r, unsigned long *v
     unsigned paths = pp_path_count(r);
     unsigned char *uses = calloc((size_t)g->n + 1, 1);
     if (uses == NULL)
-        fail("out of memory");
+        bench_fail("out of memory");
     *vertices = 0;
     *edges = 0;
     *bare = 1;
@@ -99,6 +77,7 @@ static void witness_size(const pw_graph *g, const pp_result *r, unsigned long *v
 
 int main(int argc, char **argv)
 {
+    bench_tool = "certify_phases";
     size_t glen, cap = 0;
     unsigned char sha[32];
     pw_limits lim;
@@ -107,42 +86,42 @@ int main(int argc, char **argv)
     pp_result r;
     char *cert = NULL;
     if (argc != 3)
-        fail("usage: certify_phases GRAPH CERT");
+        bench_fail("usage: certify_phases GRAPH CERT");
     pw_limits_default(&lim);
     long hwm[6];
     phase_peak();
-    double t0 = now();
-    char *graph = slurp(argv[1], &glen);
+    double t0 = bench_now();
+    char *graph = bench_slurp(argv[1], &glen);
     hwm[0] = phase_peak();
-    double t1 = now();
+    double t1 = bench_now();
     if (EVP_Digest(graph, glen, sha, NULL, EVP_sha256(), NULL) != 1)
-        fail("SHA-256 failed");
-    double t2 = now();
+        bench_fail("SHA-256 failed");
+    double t2 = bench_now();
     if (pw_graph_parse(graph, glen, &lim, &g, &v) != PW_OK)
-        fail("the graph does not parse");
+        bench_fail("the graph does not parse");
     hwm[1] = phase_peak();
-    double t3 = now();
+    double t3 = bench_now();
     memset(&r, 0, sizeof r);
     if (pp_certify(&g, &r) != 0)
-        fail("pp_certify failed");
+        bench_fail("pp_certify failed");
     hwm[2] = phase_peak();
-    double t4 = now();
+    double t4 = bench_now();
     size_t clen;
     if (pp_cert_text(&g, &r, sha, &cert, &cap, &clen) != 0)
-        fail("cannot render the certificate");
+        bench_fail("cannot render the certificate");
     pp_kind kind = r.kind;
     if (kind == PP_PLANAR)
         pp_result_free(&r); /* as cli/prover.c does: the rotation is all in the text */
     hwm[3] = phase_peak();
-    double t5 = now();
+    double t5 = bench_now();
     pw_check_parsed(&g, graph, glen, cert, clen, &v);
     hwm[4] = phase_peak();
-    double t6 = now();
+    double t6 = bench_now();
     FILE *out = fopen(argv[2], "wb");
     if (out == NULL || fwrite(cert, 1, clen, out) != clen || fclose(out) != 0)
-        fail("cannot write the certificate");
+        bench_fail("cannot write the certificate");
     hwm[5] = phase_peak();
-    double t7 = now();
+    double t7 = bench_now();
     unsigned long wv = 0, we = 0;
     int bare = 1;
     if (kind != PP_PLANAR)

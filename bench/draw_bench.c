@@ -4,31 +4,13 @@
  * parse, grid drawing, certificate text, kernel check.
  * usage: draw_bench GRAPH ROTATION_CERT  -> one line of key=value pairs
  */
+#include "bench_util.h"
 #include "draw.h"
 #include "planewit.h"
 
 #include <stdlib.h>
 #include <string.h>
 #include <time.h>
-
-static double now(void)
-{
-    struct timespec t;
-    clock_gettime(CLOCK_MONOTONIC, &t);
-    return (double)t.tv_sec + (double)t.tv_nsec * 1e-9;
-}
-
-static char *slurp(const char *path, size_t *len)
-{
-    FILE *f = fopen(path, "rb");
-    char *buf = NULL;
-    if (f == NULL || pw_read_all(f, UINT64_MAX, &buf, len) != PW_OK) {
-        fprintf(stderr, "draw_bench: cannot read %s\n", path);
-        exit(2);
-    }
-    fclose(f);
-    return buf;
-}
 
 /* rot from "around V : W ..." lines (trusted bench input, produced by draw_gen.py). */
 static uint32_t *read_rotation(const pw_graph *g, char *text)
@@ -54,6 +36,7 @@ static uint32_t *read_rotation(const pw_graph *g, char *text)
 
 int main(int argc, char **argv)
 {
+    bench_tool = "draw_bench";
     size_t glen, rlen, clen;
     pw_limits lim;
     pw_graph g;
@@ -64,22 +47,22 @@ int main(int argc, char **argv)
         fputs("usage: draw_bench GRAPH ROTATION_CERT\n", stderr);
         return 2;
     }
-    char *graph = slurp(argv[1], &glen), *rtext = slurp(argv[2], &rlen);
+    char *graph = bench_slurp(argv[1], &glen), *rtext = bench_slurp(argv[2], &rlen);
     pw_limits_default(&lim);
-    double t0 = now();
+    double t0 = bench_now();
     if (pw_graph_parse(graph, glen, &lim, &g, &v) != PW_OK)
         return 2;
-    double t1 = now();
+    double t1 = bench_now();
     uint32_t *rot = read_rotation(&g, rtext);
-    double t2 = now();
+    double t2 = bench_now();
     if (pd_draw_grid(&g, rot, &d) != 0)
         return 3;
-    double t3 = now();
+    double t3 = bench_now();
     if (pd_cert_text(&g, rot, &d, NULL, &cert, &clen) != 0)
         return 3;
-    double t4 = now();
+    double t4 = bench_now();
     pw_check_parsed(&g, graph, glen, cert, clen, &v);
-    double t5 = now();
+    double t5 = bench_now();
     printf("n=%u m=%u parse=%.3f draw=%.3f text=%.3f kernel=%.3f verdict=%s grid=%lldx%lld "
            "bound=%u\n", g.n, g.m, t1 - t0, t3 - t2, t4 - t3, t5 - t4,
            v.status == PW_ACCEPTED ? "accepted" : pw_code_name(v.code), (long long)d.width,

@@ -11,7 +11,7 @@ work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
 out=bench/results-draw.md
 cc -std=c11 -D_POSIX_C_SOURCE=200809L -O2 -Ichecker -Iproducer -o "$work/draw_bench" \
-    bench/draw_bench.c producer/draw_*.c producer/cert_write.c "$build/libplanewit-check.a" -lcrypto -lm
+    bench/draw_bench.c "$build"/producer/*.o "$build/libplanewit-check.a" -lcrypto -lm
 c++ -O2 -std=c++17 -o "$work/draw_boost" bench/draw_boost.cpp
 field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
 {

@@ -59,23 +59,41 @@ static void put_text(writer *w, const char *text)
     w->len += n;
 }
 
+/* "00" to "99": numbers are formatted two digits per division, which halves
+   the work of a text that is mostly numbers. */
+static const char digit_pairs[] =
+    "0001020304050607080910111213141516171819"
+    "2021222324252627282930313233343536373839"
+    "4041424344454647484950515253545556575859"
+    "6061626364656667686970717273747576777879"
+    "8081828384858687888990919293949596979899";
+
 /* Space, then the number ('-' before a negative one, never "-0"): the
    separator every list in the format uses. */
 static void put_number(writer *w, int64_t x)
 {
     char digits[20];
-    int k = 0;
+    size_t k = sizeof digits;
     uint64_t u = x < 0 ? (uint64_t)0 - (uint64_t)x : (uint64_t)x;
     make_room(w, NUMBER_ROOM);
-    do {
-        digits[k++] = (char)('0' + u % 10u);
-        u /= 10u;
-    } while (u != 0);
-    w->buf[w->len++] = ' ';
+    for (; u >= 100u; u /= 100u) {
+        k -= 2;
+        memcpy(digits + k, digit_pairs + 2 * (u % 100u), 2);
+    }
+    if (u >= 10u) {
+        k -= 2;
+        memcpy(digits + k, digit_pairs + 2 * u, 2);
+    } else {
+        digits[--k] = (char)('0' + u);
+    }
+    /* a local cursor: stores through a char pointer could alias w->len, which
+       would then be reloaded and stored again for every byte */
+    char *at = w->buf + w->len;
+    *at++ = ' ';
     if (x < 0)
-        w->buf[w->len++] = '-';
-    while (k > 0)
-        w->buf[w->len++] = digits[--k];
+        *at++ = '-';
+    memcpy(at, digits + k, sizeof digits - k);
+    w->len = (size_t)(at + (sizeof digits - k) - w->buf);
 }
 
 static void put_header(writer *w, const unsigned char *sha)

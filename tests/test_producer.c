@@ -733,6 +733,50 @@ static void test_certificate_text(void **state)
     free(e.ends);
 }
 
+/* Numbers are formatted by hand, two digits at a time: every digit count,
+   zero, negatives and both ends of the 64-bit range, written out by hand. */
+static void test_number_text(void **state)
+{
+    (void)state;
+    static const struct {
+        int64_t x, y;
+        const char *line;
+    } want[] = {
+        {0, 9, "point 0 : 0 9\n"},
+        {10, 99, "point 1 : 10 99\n"},
+        {100, 1009, "point 2 : 100 1009\n"},
+        {-1, -10, "point 3 : -1 -10\n"},
+        {-205, 123456789, "point 4 : -205 123456789\n"},
+        {4294967296, 1000000000000, "point 5 : 4294967296 1000000000000\n"},
+        {INT64_MAX, INT64_MIN, "point 6 : 9223372036854775807 -9223372036854775808\n"},
+    };
+    enum { N = sizeof want / sizeof want[0] };
+    edges_t e;
+    edges_init(&e, N);
+    edges_add(&e, 0, 1);
+    pw_graph g = build_graph(&e);
+    uint32_t rot[2] = {0, 1}; /* dart 0 leaves vertex 0, dart 1 vertex 1 */
+    int64_t x[N], y[N];
+    for (int v = 0; v < N; v++) {
+        x[v] = want[v].x;
+        y[v] = want[v].y;
+    }
+    char *text = NULL;
+    size_t len = 0;
+    assert_int_equal(pp_drawing_cert_text(&g, rot, x, y, NULL, &text, &len), 0);
+    assert_int_equal(strlen(text), len);
+    const char *at = strstr(text, "point 0 :");
+    assert_non_null(at);
+    for (int v = 0; v < N; v++) {
+        assert_true(strncmp(at, want[v].line, strlen(want[v].line)) == 0);
+        at += strlen(want[v].line);
+    }
+    assert_int_equal(*at, '\0');
+    free(text);
+    graph_release(&g);
+    free(e.ends);
+}
+
 #if defined(__SANITIZE_ADDRESS__)
 #define UNDER_ASAN 1
 #elif defined(__has_feature)
@@ -791,6 +835,7 @@ int main(void)
         cmocka_unit_test(test_k3n_gives_k33_itself),
         cmocka_unit_test(test_petersen),
         cmocka_unit_test(test_certificate_text),
+        cmocka_unit_test(test_number_text),
         cmocka_unit_test(test_all_small_graphs),
         cmocka_unit_test(test_agrees_with_networkx),
         cmocka_unit_test(test_random_near_threshold),

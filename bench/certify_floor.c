@@ -1,0 +1,159 @@
+/*
+ * certify_floor.c - what any depth-first planarity test must pay on a graph
+ * file, measured on the same files as the certify benchmark (issue 3), so
+ * that certify's own algorithm phase can be read against a floor and not
+ * only against its parse phase.
+ *
+ * Both published linear-time methods start from a depth-first search.  On a
+ * file whose vertex ids are shuffled and whose edges come in random order,
+ * that search cannot avoid one look-up at a random place per dart.  This tool
+ * times, after the kernel's parse (pw_graph_parse, as certify does):
+ *   gather  the neighbour of every dart in adjacency order (one pass over the
+ *           darts, one random read each), which certify's search does first;
+ *   dfs     a bare iterative depth-first numbering over those neighbours
+ *           (number and parent only: no lowpoints, no pieces);
+ *   relabel the adjacency rebuilt with depth-first numbers as ids and each
+ *           vertex's darts stored together in that order (what a producer
+ *           with a "darts of a vertex side by side" layout would pay first);
+ *   dfs2    the same bare search again on the relabelled adjacency.
+ * Each figure, parse included, is the median of ROUNDS runs (default 3) in
+ * this one process.
+ *
+ * Usage: certify_floor GRAPH [ROUNDS] -> one line of key=value pairs (seconds).
+ */
+#include "bench_util.h"
+#include "planewit.h"
+
+#include <stdlib.h>
+#include <string.h>
+#include <time.h>
+
+#define NONE UINT32_MAX
+
+static void *must_alloc(size_t count, size_t size)
+{
+    void *p = calloc(count ? count : 1, size);
+    if (p == NULL)
+        bench_fail("out of memory");
+    return p;
+}
+
+static void gather(const pw_graph *g, uint32_t *nbr)
+{
+    for (size_t i = 0; i < 2 * (size_t)g->m; i++)
+        nbr[i] = g->ends[g->darts[i] ^ 1u];
+}
+
+/* Depth-first numbers of every vertex over an adjacency (first, nbr); the
+   explicit stack holds vertices, iter the next position of each. */
+static void bare_dfs(uint32_t n, const uint32_t *first, const uint32_t *nbr, uint32_t *dfi,
+                     uint32_t *parent, uint32_t *iter, uint32_t *stack)
+{
+    uint32_t next = 0;
+    for (uint32_t v = 0; v < n; v++)
+        dfi[v] = NONE;
+    for (uint32_t r = 0; r < n; r++) {
+        if (dfi[r] != NONE)
+            continue;
+        uint32_t top = 0;
+        dfi[r] = next++;
+        parent[r] = NONE;
+        iter[r] = first[r];
+        stack[top++] = r;
+        while (top > 0) {
+            uint32_t x = stack[top - 1], i = iter[x], end = first[x + 1];
+            while (i < end && dfi[nbr[i]] != NONE)
+                i++;
+            iter[x] = i + (i < end);
+            if (i == end) {
+                top--;
+                continue;
+            }
+            uint32_t y = nbr[i];
+            dfi[y] = next++;
+            parent[y] = x;
+            iter[y] = first[y];
+            stack[top++] = y;
+        }
+    }
+}
+
+/* The adjacency with depth-first numbers as ids, each vertex's darts together
+   in the same order as before: a counting pass, then one scattered write per dart. */
+static void relabel(const pw_graph *g, const uint32_t *nbr, const uint32_t *dfi, uint32_t *first2,
+                    uint32_t *nbr2)
+{
+    uint32_t n = g->n_adj;
+    for (uint32_t v = 0; v < n; v++)
+        first2[dfi[v] + 1] = g->first[v + 1] - g->first[v];
+    first2[0] = 0;
+    for (uint32_t x = 0; x < n; x++)
+        first2[x + 1] += first2[x];
+    for (uint32_t v = 0; v < n; v++) {
+        uint32_t at = first2[dfi[v]];
+        for (uint32_t i = g->first[v]; i < g->first[v + 1]; i++)
+            nbr2[at++] = dfi[nbr[i]];
+    }
+}
+
+static int by_value(const void *a, const void *b)
+{
+    double x = *(const double *)a, y = *(const double *)b;
+    return (x > y) - (x < y);
+}
+
+static double median(double *t, int k)
+{
+    qsort(t, (size_t)k, sizeof *t, by_value);
+    return t[k / 2];
+}
+
+int main(int argc, char **argv)
+{
+    bench_tool = "certify_floor";
+    enum { MAX_ROUNDS = 15 };
+    if (argc < 2 || argc > 3)
+        bench_fail("usage: certify_floor GRAPH [ROUNDS]");
+    int rounds = argc == 3 ? atoi(argv[2]) : 3;
+    if (rounds < 1 || rounds > MAX_ROUNDS)
+        bench_fail("ROUNDS must be 1 to 15");
+    size_t len = 0;
+    char *text = bench_slurp(argv[1], &len);
+    pw_limits lim;
+    pw_limits_default(&lim);
+    pw_graph g;
+    pw_verdict v;
+    double parse[MAX_ROUNDS];
+    for (int r = 0; r < rounds; r++) { /* the kernel's parse, as certify runs it */
+        if (r > 0)
+            pw_graph_free(&g);
+        double t0 = bench_now();
+        if (pw_graph_parse(text, len, &lim, &g, &v) != PW_OK)
+            bench_fail("the graph does not parse");
+        parse[r] = bench_now() - t0;
+    }
+    size_t darts = 2 * (size_t)g.m, n = g.n_adj;
+    uint32_t *nbr = must_alloc(darts, 4), *nbr2 = must_alloc(darts, 4);
+    uint32_t *dfi = must_alloc(n, 4), *parent = must_alloc(n, 4), *iter = must_alloc(n, 4);
+    uint32_t *stack = must_alloc(n, 4), *first2 = must_alloc(n + 1, 4), *dfi2 = must_alloc(n, 4);
+    double t[4][MAX_ROUNDS];
+    for (int r = 0; r < rounds; r++) {
+        double a = bench_now();
+        gather(&g, nbr);
+        double b = bench_now();
+        bare_dfs(g.n_adj, g.first, nbr, dfi, parent, iter, stack);
+        double c = bench_now();
+        relabel(&g, nbr, dfi, first2, nbr2);
+        double d = bench_now();
+        bare_dfs(g.n_adj, first2, nbr2, dfi2, parent, iter, stack);
+        double e = bench_now();
+        t[0][r] = b - a, t[1][r] = c - b, t[2][r] = d - c, t[3][r] = e - d;
+    }
+    for (uint32_t x = 0; x < g.n_adj; x++) /* a search in DFI order numbers in DFI order */
+        if (dfi2[x] != x)
+            bench_fail("the relabelled search disagrees with the first");
+    printf("n=%u m=%u parse=%.4f gather=%.4f dfs=%.4f relabel=%.4f dfs2=%.4f\n", g.n_adj, g.m,
+           median(parse, rounds), median(t[0], rounds), median(t[1], rounds), median(t[2], rounds),
+           median(t[3], rounds));
+    return 0;
+}
