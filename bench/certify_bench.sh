@@ -43,13 +43,11 @@ if [ ! -x /usr/bin/time ]; then
     echo "installing Debian 'time' for peak-memory figures ..." >&2
     apt-get install -y --no-install-recommends time >/dev/null
 fi
-cflags="-std=c11 -D_POSIX_C_SOURCE=200809L -O2 -Wall -Wextra -Werror"
-cc $cflags -o "$work/gen" bench/certify_gen.c
-cc $cflags -Ichecker -Iproducer -o "$work/phases" bench/certify_phases.c \
-    "$build"/producer/*.o "$build/libplanewit-check.a" -lcrypto -lm
+. bench/tools.sh
+bench_build certify_gen "$work" "$build"
+bench_build certify_phases "$work" "$build"
 c++ -O2 -std=c++17 -o "$work/boost" bench/certify_boost.cpp
 
-field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
 elapsed() { awk -v a="$1" -v b="$(date +%s.%N)" 'BEGIN { printf "%.4f", b - a }'; }
 
 # Medians of the numeric keys of key=value lines; other keys as on the first line.
@@ -67,7 +65,7 @@ medians() {
 
 # One run of ours: the phases, the whole certify process, the check of its output.
 ours_once() { # GRAPH -> key=value line
-    p=$("$work/phases" "$1" "$work/phases.cert")
+    p=$("$work/certify_phases" "$1" "$work/phases.cert")
     start=$(date +%s.%N)
     /usr/bin/time -f %M -o "$work/rss" "$build/planewit" certify "$1" -o "$work/c.cert" >/dev/null 2>&1 ||
         { echo "planewit certify failed on $1" >&2; exit 1; }
@@ -102,7 +100,7 @@ nx_estimate() { # FAMILY M -> seconds, or 0 when no earlier size ran
 
 for size in $sizes; do
     for family in $families; do
-        nm=$("$work/gen" "$family" "$size" "$seed" "$work/g.graph")
+        nm=$("$work/certify_gen" "$family" "$size" "$seed" "$work/g.graph")
         m=$(field "$nm" m)
         echo "== $family, $m edges" >&2
         runs=$repeat; [ "$size" -le 1000000 ] || runs=$large_repeat
@@ -140,9 +138,9 @@ bipartite() { awk -v n="$1" 'BEGIN { print "graph", n + 3, 3 * n
     for (a = 0; a < 3; a++) for (b = 3; b < n + 3; b++) print a, b }'; }
 for n in 5 6 8 12; do
     complete "$n" >"$work/k.graph"
-    echo "small=K$n $("$work/phases" "$work/k.graph" "$work/k.cert")" >>"$work/data"
+    echo "small=K$n $("$work/certify_phases" "$work/k.graph" "$work/k.cert")" >>"$work/data"
     bipartite "$n" >"$work/k.graph"
-    echo "small=K3,$n $("$work/phases" "$work/k.graph" "$work/k.cert")" >>"$work/data"
+    echo "small=K3,$n $("$work/certify_phases" "$work/k.graph" "$work/k.cert")" >>"$work/data"
 done
 
 awk -v repeat="$repeat" -v large_repeat="$large_repeat" -v load_before="$load_before" -v load_after="$(cut -d' ' -f1-3 /proc/loadavg)" \

@@ -37,19 +37,15 @@ load_before=$(cut -d' ' -f1-3 /proc/loadavg)
 started=$(date +%s)
 
 command -v valgrind >/dev/null || apt-get install -y --no-install-recommends valgrind >/dev/null
-cflags="-std=c11 -D_POSIX_C_SOURCE=200809L -O2 -g -Wall -Wextra -Werror"
-cc $cflags -o "$work/gen" bench/certify_gen.c
-cc $cflags -Ichecker -o "$work/floor" bench/certify_floor.c "$build/libplanewit-check.a" -lcrypto -lm
-cc $cflags -Ichecker -Iproducer -o "$work/phases" bench/certify_phases.c \
-    "$build"/producer/*.o "$build/libplanewit-check.a" -lcrypto -lm
+. bench/tools.sh
+for tool in certify_gen certify_floor certify_phases; do bench_build "$tool" "$work" "$build"; done
 
-field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
 median() { sort -g | awk '{ v[NR] = $1 } END { print v[int((NR + 1) / 2)] }'; }
 graph() { echo "$work/$1-$2.graph"; }
 
 for f in $families; do
     for m in $(echo "$sizes $work_sizes" | tr ' ' '\n' | sort -un); do
-        "$work/gen" "$f" "$m" "$seed" "$(graph "$f" "$m")" >/dev/null
+        "$work/certify_gen" "$f" "$m" "$seed" "$(graph "$f" "$m")" >/dev/null
     done
 done
 
@@ -59,10 +55,10 @@ for m in $sizes; do
         g=$(graph "$f" "$m")
         : >"$work/alg"
         for r in $(seq "$rounds"); do
-            p=$("$work/phases" "$g" "$work/c.cert")
+            p=$("$work/certify_phases" "$g" "$work/c.cert")
             field "$p" algorithm >>"$work/alg"
         done
-        fl=$("$work/floor" "$g" "$rounds")
+        fl=$("$work/certify_floor" "$g" "$rounds")
         echo "time family=$f $fl algorithm=$(median <"$work/alg")" >>"$work/raw"
         echo "timed $f $m" >&2
     done
@@ -71,7 +67,7 @@ done
 # 2. Counted: instructions per phase under callgrind, JOBS at a time.
 count_one() { # FAMILY EDGES -> a "work" line
     cg="$work/cg-$1-$2"
-    valgrind --tool=callgrind --callgrind-out-file="$cg" "$work/phases" "$(graph "$1" "$2")" \
+    valgrind --tool=callgrind --callgrind-out-file="$cg" "$work/certify_phases" "$(graph "$1" "$2")" \
         "$cg.cert" >"$cg.line" 2>/dev/null
     callgrind_annotate --inclusive=yes "$cg" |
         awk -v f="$1" -v m="$(field "$(cat "$cg.line")" m)" '

@@ -25,8 +25,6 @@
 #include "planewit.h"
 
 #include <stdlib.h>
-#include <string.h>
-#include <time.h>
 
 #define NONE UINT32_MAX
 

@@ -20,7 +20,6 @@
 #include <openssl/evp.h>
 #include <stdlib.h>
 #include <string.h>
-#include <time.h>
 
 /*
  * The peak resident size (KiB) since the last call.  Writing 5 to clear_refs

@@ -10,7 +10,6 @@
 
 #include <stdlib.h>
 #include <string.h>
-#include <time.h>
 
 /* rot from "around V : W ..." lines (trusted bench input, produced by draw_gen.py). */
 static uint32_t *read_rotation(const pw_graph *g, char *text)

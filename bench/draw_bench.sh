@@ -10,10 +10,9 @@ edges=${2:-1000000}
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
 out=bench/results-draw.md
-cc -std=c11 -D_POSIX_C_SOURCE=200809L -O2 -Ichecker -Iproducer -o "$work/draw_bench" \
-    bench/draw_bench.c "$build"/producer/*.o "$build/libplanewit-check.a" -lcrypto -lm
+. bench/tools.sh
+bench_build draw_bench "$work" "$build"
 c++ -O2 -std=c++17 -o "$work/draw_boost" bench/draw_boost.cpp
-field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
 {
     echo "# Drawing benchmark ($(date -u +%Y-%m-%d), $(uname -m), $edges edges, seed 7)"
     echo
