@@ -9,11 +9,11 @@ bench_cc=${bench_cc:-cc}
 bench_cflags=${bench_cflags:-"-O2 -g"}
 
 # bench_build NAME OUT_DIR BUILD_DIR: bench/NAME.c into OUT_DIR/NAME, linked with the
-# build's producer objects and kernel library.
+# build's producer objects, its memory policy (cli/heap.c) and kernel library.
 bench_build() {
     # shellcheck disable=SC2086 # bench_cflags is a list of words on purpose
     "$bench_cc" -std=c11 -D_POSIX_C_SOURCE=200809L -Wall -Wextra -Werror $bench_cflags \
-        -Ichecker -Iproducer -o "$2/$1" "bench/$1.c" "$3"/producer/*.o \
+        -Ichecker -Iproducer -Icli -o "$2/$1" "bench/$1.c" "$3"/producer/*.o "$3/cli/heap.o" \
         "$3/libplanewit-check.a" -lcrypto -lm
 }
 

@@ -47,14 +47,6 @@ static const char certify_usage[] =
     "Exit status: 0 certified (planar or not), 2 unusable input or usage error,\n"
     "3 internal error (a certificate the kernel refused; please report it).\n";
 
-/*
- * The one-heap policy (heap.c) takes about a quarter off the whole run at 10^6 edges
- * but adds some 15% to the peak memory, which matters most at the largest
- * inputs (the aim: 120 bytes per edge at 10^7 edges); a graph file of 10^6
- * edges has under 20 MB, one of 10^7 about 160 MB.
- */
-#define HEAP_LARGEST ((uint64_t)48 << 20)
-
 static int usage_error(const char *fmt, ...) __attribute__((format(printf, 1, 2)));
 
 static int usage_error(const char *fmt, ...)
@@ -217,7 +209,7 @@ static int load_names(const certify_args *a, const pw_graph *g, const unsigned c
 }
 
 /* Everything after the graph file was read; returns the exit status. */
-static int certify_graph(const certify_args *a, const cli_input *in, pw_graph *g)
+static int certify_graph(const certify_args *a, cli_input *in, pw_graph *g)
 {
     unsigned char sha[32];
     name_table names = {0};
@@ -230,13 +222,17 @@ static int certify_graph(const certify_args *a, const cli_input *in, pw_graph *g
     }
     if (a->names != NULL && load_names(a, g, sha, &names) != 0)
         goto done;
-    prove_status got = prover_run(&p, g, in->bytes, in->len, sha, &v);
+    prove_status got = prover_run_file(&p, in, &a->lim, g, sha, &v);
+    if (got == PROVE_GRAPH_CHANGED)
+        fprintf(stderr, "planewit certify: %s: the file changed while it was being certified; "
+                        "nothing was written\n", a->graph);
     if (got == PROVE_NO_MEMORY) {
         fputs("planewit certify: out of memory\n", stderr);
     } else if (got == PROVE_REFUSED || got == PROVE_PRODUCER_FAILED) {
         certify_report_bug(got == PROVE_REFUSED ? &v : NULL, a->graph, "");
         status = CLI_EXIT_BUG;
-    } else if (a->output == NULL || write_certificate(a->output, &p) == 0) {
+    } else if (got == PROVE_ACCEPTED &&
+               (a->output == NULL || write_certificate(a->output, &p) == 0)) {
         report(a, &p, g, a->names != NULL ? &names : NULL, &v);
         status = 0;
     }
@@ -258,7 +254,7 @@ int cmd_certify(int argc, char **argv)
         return parsed > 0 ? 0 : CLI_EXIT_USAGE;
     if (a.graph6 != NULL)
         return certify_stream(&a);
-    cli_heap_for_one_job(a.graph, HEAP_LARGEST);
+    cli_heap_for_one_job(a.graph, CLI_CERTIFY_HEAP_LARGEST);
     if (cli_read_input(&in, a.graph, &a.lim) != 0)
         return CLI_EXIT_USAGE;
     memset(&v, 0, sizeof v);

@@ -46,7 +46,9 @@ typedef enum {
     PROVE_ACCEPTED = 0,  /* p->cert holds a certificate the kernel accepted, v its verdict */
     PROVE_NO_MEMORY = -1,
     PROVE_PRODUCER_FAILED = -2, /* the producer reported an inconsistency: a bug */
-    PROVE_REFUSED = -3   /* the kernel refused our own certificate: a bug; v says why */
+    PROVE_REFUSED = -3,  /* the kernel refused our own certificate: a bug; v says why */
+    PROVE_REREAD_FAILED = -4, /* the graph file could not be read again (reported) */
+    PROVE_GRAPH_CHANGED = -5  /* the graph file read again is not what was parsed */
 } prove_status;
 
 /*
@@ -55,6 +57,20 @@ typedef enum {
  */
 prove_status prover_run(prover *p, const pw_graph *g, const char *graph, size_t graph_len,
                         const unsigned char *sha, pw_verdict *v);
+/* The two halves of prover_run, for a caller that does not hold the graph's
+   bytes in between: PROVE_ACCEPTED from prover_make means rendered, unchecked. */
+prove_status prover_make(prover *p, const pw_graph *g, const unsigned char *sha);
+prove_status prover_check(const prover *p, const pw_graph *g, const char *graph,
+                          size_t graph_len, pw_verdict *v);
+/*
+ * prover_run for g parsed from in, whose digest is sha.  When in->path names
+ * a regular file, its bytes are freed while the witness is made and read
+ * again (in->bytes, with lim) for the check.  sha (not NULL) is the digest
+ * of what was parsed; the certificate carries it, so the check cannot pass
+ * on other bytes, and a file that changed is told apart from a bug.
+ */
+prove_status prover_run_file(prover *p, cli_input *in, const pw_limits *lim, const pw_graph *g,
+                             const unsigned char *sha, pw_verdict *v);
 
 /* ---- cmd_certify.c, certify_stream.c ----------------------------------- */
 

@@ -237,8 +237,8 @@ static size_t cert_text_bound(const pw_graph *g, const pp_result *r)
 }
 
 /* A writer over *buf, which is replaced by a fresh block when it holds fewer
-   than `bound` bytes (at least OUT_BUFFER): nothing in it is kept, so a plain
-   malloc, not a copying realloc. */
+   than `bound` bytes (at least OUT_BUFFER): nothing in it is kept, so a fresh
+   block, not a copying realloc. */
 static int memory_writer(writer *w, char **buf, size_t *cap, size_t bound)
 {
     if (bound < OUT_BUFFER)
@@ -246,7 +246,7 @@ static int memory_writer(writer *w, char **buf, size_t *cap, size_t bound)
     if (*buf == NULL || *cap < bound) {
         free(*buf);
         *cap = 0;
-        if ((*buf = malloc(bound)) == NULL)
+        if ((*buf = pp_alloc_large(bound)) == NULL)
             return -1;
         *cap = bound;
     }

@@ -2,10 +2,8 @@
  * certify.c - pp_certify(): allocation, the run, and the hand-over of either
  * the rotation system or the Kuratowski subdivision.
  */
-#define _DEFAULT_SOURCE /* madvise's MADV_HUGEPAGE where the system has it */
 #include <stdlib.h>
 #include <string.h>
-#include <sys/mman.h>
 
 #include "pp_state.h"
 
@@ -13,25 +11,6 @@ typedef struct {
     uint32_t *block; /* all per-vertex arrays */
     uint8_t *flipped;
 } pp_memory;
-
-/*
- * Large arrays are aligned to 2 MiB and offered to the kernel as huge-page
- * candidates: these arrays are touched at random, and on virtual machines a
- * first-touch fault per 4 KiB page is a large share of the run time.
- */
-static void *alloc_large(size_t bytes)
-{
-    const size_t huge = (size_t)2 << 20;
-    if (bytes < 2 * huge)
-        return malloc(bytes);
-    void *p = NULL;
-    if (posix_memalign(&p, huge, bytes) != 0)
-        return NULL;
-#ifdef MADV_HUGEPAGE
-    madvise(p, bytes - bytes % huge, MADV_HUGEPAGE);
-#endif
-    return p;
-}
 
 static void release(pp_state *s, pp_memory *mem)
 {
@@ -60,12 +39,12 @@ static int allocate(pp_state *s, pp_memory *mem, const pw_graph *g)
     memset(s, 0, sizeof *s);
     s->g = g;
     s->n = g->n_adj;
-    mem->block = alloc_large((17 * n + 1) * sizeof(uint32_t));
+    mem->block = pp_alloc_large((17 * n + 1) * sizeof(uint32_t));
     mem->flipped = malloc(n + 1);
-    s->dfi_of = alloc_large((n + 1) * sizeof(uint32_t));
-    s->nxt = alloc_large((darts + 1) * sizeof(uint32_t));
-    s->prv = alloc_large((darts + 1) * sizeof(uint32_t));
-    s->tgt = alloc_large((darts + 1) * sizeof(uint32_t));
+    s->dfi_of = pp_alloc_large((n + 1) * sizeof(uint32_t));
+    s->nxt = pp_alloc_large((darts + 1) * sizeof(uint32_t));
+    s->prv = pp_alloc_large((darts + 1) * sizeof(uint32_t));
+    s->tgt = pp_alloc_large((darts + 1) * sizeof(uint32_t));
     if (mem->block == NULL || mem->flipped == NULL || s->dfi_of == NULL || s->nxt == NULL ||
         s->prv == NULL || s->tgt == NULL) {
         release(s, mem);

@@ -118,6 +118,9 @@ static inline uint32_t pp_arc_target(const pp_state *s, uint32_t d, uint32_t roo
     return (root != PP_NIL && t == s->parent[root - s->n]) ? root : t;
 }
 
+/* large_block.c: huge-page candidates for blocks of 4 MiB and more; free() frees */
+void *pp_alloc_large(size_t bytes);
+
 /* dfs.c: numbers vertices and starts one piece per tree edge */
 void pp_dfs(pp_state *s, uint32_t *iter, uint32_t *work); /* fills tgt */
 void pp_sort_children(pp_state *s, uint32_t *count, uint32_t *order);

@@ -10,7 +10,10 @@
 #include <stddef.h>
 #include <stdint.h>
 #include <cmocka.h>
+#include <stdio.h>
+#include <stdlib.h>
 #include <string.h>
+#include <unistd.h>
 
 #include "prove.h"
 
@@ -116,6 +119,97 @@ static void two_colouring(void **state)
     pw_graph_free(&p.g);
 }
 
+static void write_file(const char *path, const char *text)
+{
+    FILE *f = fopen(path, "wb");
+    assert_non_null(f);
+    assert_int_equal(fwrite(text, 1, strlen(text), f), strlen(text));
+    assert_int_equal(fclose(f), 0);
+}
+
+/* Reads path into *in, parses it into *g and takes its digest, as certify does. */
+static void load(const char *path, cli_input *in, pw_graph *g, unsigned char *sha)
+{
+    pw_limits lim;
+    pw_verdict v;
+    pw_limits_default(&lim);
+    assert_int_equal(cli_read_input(in, path, &lim), PW_OK);
+    assert_int_equal(pw_graph_parse(in->bytes, in->len, &lim, g, &v), PW_OK);
+    assert_int_equal(cli_sha256(in->bytes, in->len, sha), 0);
+}
+
+/* The same K4 as k4 with its edges in another order: other bytes, same graph. */
+static const char k4_reordered[] = "graph 4 6\n2 3\n0 1\n0 2\n0 3\n1 2\n1 3\n";
+
+/*
+ * A graph file is let go while the witness is made and read again for the
+ * check: unchanged, the check passes on the bytes read again; changed in
+ * between, or no longer readable within the limits, that is what is
+ * reported, never a refusal (which would be a bug) or an acceptance.
+ */
+static void file_read_again_for_check(void **state)
+{
+    char path[] = "/tmp/planewit-test-prover-XXXXXX";
+    int fd = mkstemp(path);
+    prover pr;
+    pw_verdict v;
+    pw_limits lim;
+    cli_input in;
+    pw_graph g;
+    unsigned char sha[32];
+    (void)state;
+    assert_true(fd >= 0);
+    close(fd);
+    pw_limits_default(&lim);
+    assert_int_equal(prover_open(&pr, WITNESS_SUBDIVISION), 0);
+
+    write_file(path, k4);
+    load(path, &in, &g, sha);
+    assert_int_equal(prover_run_file(&pr, &in, &lim, &g, sha, &v), PROVE_ACCEPTED);
+    assert_int_equal(in.len, strlen(k4));
+    assert_memory_equal(in.bytes, k4, strlen(k4));
+    assert_memory_equal(v.graph_sha256, sha, 32);
+    cli_free_input(&in);
+
+    write_file(path, k4_reordered); /* after this reading, before the check */
+    assert_int_equal(prover_run_file(&pr, &in, &lim, &g, sha, &v), PROVE_GRAPH_CHANGED);
+    cli_free_input(&in);
+    pw_graph_free(&g);
+
+    load(path, &in, &g, sha);
+    lim.max_bytes = 10; /* the file, read again, is over the limit */
+    assert_int_equal(prover_run_file(&pr, &in, &lim, &g, sha, &v), PROVE_REREAD_FAILED);
+    assert_null(in.bytes);
+    pw_graph_free(&g);
+    unlink(path);
+    prover_close(&pr);
+}
+
+/* Standard input cannot be read twice: its bytes are kept for the check. */
+static void standard_input_is_kept(void **state)
+{
+    prover pr;
+    pw_verdict v;
+    pw_limits lim;
+    parsed p;
+    unsigned char sha[32];
+    (void)state;
+    pw_limits_default(&lim);
+    parse(&p, k5);
+    char *bytes = malloc(sizeof k5);
+    assert_non_null(bytes);
+    memcpy(bytes, k5, sizeof k5);
+    cli_input in = {"-", bytes, strlen(k5)};
+    assert_int_equal(cli_sha256(k5, strlen(k5), sha), 0);
+    assert_int_equal(prover_open(&pr, WITNESS_SUBDIVISION), 0);
+    assert_int_equal(prover_run_file(&pr, &in, &lim, &p.g, sha, &v), PROVE_ACCEPTED);
+    assert_ptr_equal(in.bytes, bytes);
+    assert_int_equal(v.witness, PW_WITNESS_SUBDIVISION_K5);
+    cli_free_input(&in);
+    pw_graph_free(&p.g);
+    prover_close(&pr);
+}
+
 int main(void)
 {
     const struct CMUnitTest tests[] = {
@@ -123,6 +217,8 @@ int main(void)
         cmocka_unit_test(buffer_reused_across_graphs),
         cmocka_unit_test(cheapest_prefers_counts),
         cmocka_unit_test(two_colouring),
+        cmocka_unit_test(file_read_again_for_check),
+        cmocka_unit_test(standard_input_is_kept),
     };
     return cmocka_run_group_tests(tests, NULL, NULL);
 }
