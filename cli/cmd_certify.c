@@ -226,6 +226,9 @@ static int certify_graph(const certify_args *a, cli_input *in, pw_graph *g)
     if (got == PROVE_GRAPH_CHANGED)
         fprintf(stderr, "planewit certify: %s: the file changed while it was being certified; "
                         "nothing was written\n", a->graph);
+    if (got == PROVE_REREAD_FAILED) /* the reason is printed already */
+        fprintf(stderr, "planewit certify: %s: could not be read again for the self-check; "
+                        "nothing was written\n", a->graph);
     if (got == PROVE_NO_MEMORY) {
         fputs("planewit certify: out of memory\n", stderr);
     } else if (got == PROVE_REFUSED || got == PROVE_PRODUCER_FAILED) {
