@@ -201,11 +201,18 @@ build-fault/alloc_failure_vg: $(HARD_DEPS)
 GCOVR := gcovr --root . --filter 'checker/' build-cov/checker build-cov/fault
 COV_FAULT_OBJ := $(KERNEL_SRC:checker/%.c=build-cov/fault/%.o) build-cov/fault/t_alloc_failure.o \
                  build-cov/fault/t_vector_list.o
+# Branch counts have once come out one short with the kernel unchanged (lex.c:41,
+# which test_lex covers alone); the counters' own complaints (merge mismatches,
+# unwritable or corrupt files) go to build-cov/gcov-errors.txt and are shown.
 coverage:
 	rm -rf build-cov
-	-$(MAKE) BUILD=build-cov OPT="-O0 -g --coverage -fprofile-update=atomic" check
+	mkdir -p build-cov
+	-GCOV_ERROR_FILE=$(CURDIR)/build-cov/gcov-errors.txt \
+	  $(MAKE) BUILD=build-cov OPT="-O0 -g --coverage -fprofile-update=atomic" check
 	$(MAKE) build-cov/fault/alloc_failure
-	-build-cov/fault/alloc_failure
+	-GCOV_ERROR_FILE=$(CURDIR)/build-cov/gcov-errors.txt build-cov/fault/alloc_failure
+	@if [ -s build-cov/gcov-errors.txt ]; then echo "coverage counters reported:"; \
+	  head -n 20 build-cov/gcov-errors.txt; fi
 	$(GCOVR) --txt
 	$(GCOVR) --txt --branches
 	$(GCOVR) --print-summary -o build-cov/gcovr-summary.txt
