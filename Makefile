@@ -203,16 +203,16 @@ COV_FAULT_OBJ := $(KERNEL_SRC:checker/%.c=build-cov/fault/%.o) build-cov/fault/t
                  build-cov/fault/t_vector_list.o
 # Branch counts have once come out one short with the kernel unchanged (lex.c:41,
 # which test_lex covers alone); the counters' own complaints (merge mismatches,
-# unwritable or corrupt files) go to build-cov/gcov-errors.txt and are shown.
+# unwritable or corrupt files) go to COV_ERRORS and are shown.
+COV_ERRORS := $(CURDIR)/build-cov/gcov-errors.txt
 coverage:
 	rm -rf build-cov
 	mkdir -p build-cov
-	-GCOV_ERROR_FILE=$(CURDIR)/build-cov/gcov-errors.txt \
+	-GCOV_ERROR_FILE=$(COV_ERRORS) \
 	  $(MAKE) BUILD=build-cov OPT="-O0 -g --coverage -fprofile-update=atomic" check
 	$(MAKE) build-cov/fault/alloc_failure
-	-GCOV_ERROR_FILE=$(CURDIR)/build-cov/gcov-errors.txt build-cov/fault/alloc_failure
-	@if [ -s build-cov/gcov-errors.txt ]; then echo "coverage counters reported:"; \
-	  head -n 20 build-cov/gcov-errors.txt; fi
+	-GCOV_ERROR_FILE=$(COV_ERRORS) build-cov/fault/alloc_failure
+	@if [ -s $(COV_ERRORS) ]; then echo "coverage counters reported:"; head -n 20 $(COV_ERRORS); fi
 	$(GCOVR) --txt
 	$(GCOVR) --txt --branches
 	$(GCOVR) --print-summary -o build-cov/gcovr-summary.txt

@@ -223,19 +223,17 @@ static int certify_graph(const certify_args *a, cli_input *in, pw_graph *g)
     if (a->names != NULL && load_names(a, g, sha, &names) != 0)
         goto done;
     prove_status got = prover_run_file(&p, in, &a->lim, g, sha, &v);
-    if (got == PROVE_GRAPH_CHANGED)
-        fprintf(stderr, "planewit certify: %s: the file changed while it was being certified; "
-                        "nothing was written\n", a->graph);
-    if (got == PROVE_REREAD_FAILED) /* the reason is printed already */
-        fprintf(stderr, "planewit certify: %s: could not be read again for the self-check; "
-                        "nothing was written\n", a->graph);
     if (got == PROVE_NO_MEMORY) {
         fputs("planewit certify: out of memory\n", stderr);
+    } else if (got == PROVE_GRAPH_CHANGED || got == PROVE_REREAD_FAILED) {
+        /* for a failed reading, the reader has printed its reason already */
+        fprintf(stderr, "planewit certify: %s: %s; nothing was written\n", a->graph,
+                got == PROVE_GRAPH_CHANGED ? "the file changed while it was being certified"
+                                           : "could not be read again for the self-check");
     } else if (got == PROVE_REFUSED || got == PROVE_PRODUCER_FAILED) {
         certify_report_bug(got == PROVE_REFUSED ? &v : NULL, a->graph, "");
         status = CLI_EXIT_BUG;
-    } else if (got == PROVE_ACCEPTED &&
-               (a->output == NULL || write_certificate(a->output, &p) == 0)) {
+    } else if (a->output == NULL || write_certificate(a->output, &p) == 0) {
         report(a, &p, g, a->names != NULL ? &names : NULL, &v);
         status = 0;
     }

@@ -129,7 +129,7 @@ prove_status prover_run(prover *p, const pw_graph *g, const char *graph, size_t 
  * The graph's bytes are needed again only by the self-check, which binds its
  * verdict to them.  A regular file is therefore let go while the witness is
  * made, and read again for the check.  At 10^7 edges (sparse planar) that
- * takes the search's peak from 117 to 101 bytes per edge, below the
+ * takes the search's peak from 117 to about 101 bytes per edge, below the
  * self-check's 110, which leaves room for the one-heap memory policy (cli.h,
  * CLI_CERTIFY_HEAP_LARGEST).  The certificate's graph-sha256 line is of the first
  * reading, so the kernel refuses a file that changed in between; the two
