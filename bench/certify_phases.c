@@ -93,7 +93,7 @@ int main(int argc, char **argv)
     if (argc != 3)
         bench_fail("usage: certify_phases GRAPH CERT");
     pw_limits_default(&lim);
-    cli_heap_for_one_job(argv[1], CLI_CERTIFY_HEAP_LARGEST);
+    cli_heap_for_one_job(argv[1], CLI_ONE_JOB_HEAP_LARGEST);
     long hwm[7];
     phase_peak();
     double t0 = bench_now();

@@ -255,7 +255,7 @@ int cmd_certify(int argc, char **argv)
         return parsed > 0 ? 0 : CLI_EXIT_USAGE;
     if (a.graph6 != NULL)
         return certify_stream(&a);
-    cli_heap_for_one_job(a.graph, CLI_CERTIFY_HEAP_LARGEST);
+    cli_heap_for_one_job(a.graph, CLI_ONE_JOB_HEAP_LARGEST);
     if (cli_read_input(&in, a.graph, &a.lim) != 0)
         return CLI_EXIT_USAGE;
     memset(&v, 0, sizeof v);

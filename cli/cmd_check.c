@@ -148,6 +148,7 @@ int cmd_check(int argc, char **argv)
             fputs("Try 'planewit check --help'.\n", stderr);
         return parsed > 0 ? 0 : CLI_EXIT_USAGE;
     }
+    cli_heap_for_one_job(a.graph, CLI_ONE_JOB_HEAP_LARGEST);
     pw_code failed = cli_read_input(&graph, a.graph, &a.lim);
     if (failed != PW_OK)
         return unreadable(&a, PW_FILE_GRAPH, failed);

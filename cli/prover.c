@@ -131,9 +131,9 @@ prove_status prover_run(prover *p, const pw_graph *g, const char *graph, size_t 
  * made, and read again for the check.  At 10^7 edges (sparse planar) that
  * takes the search's peak from 117 to about 101 bytes per edge, below the
  * self-check's 110, which leaves room for the one-heap memory policy (cli.h,
- * CLI_CERTIFY_HEAP_LARGEST).  The certificate's graph-sha256 line is of the first
- * reading, so the kernel refuses a file that changed in between; the two
- * digests tell that apart from a bug.
+ * CLI_ONE_JOB_HEAP_LARGEST).  The certificate's graph-sha256 line is of the
+ * first reading, so the kernel refuses a file that changed in between; the
+ * two digests tell that apart from a bug.
  */
 static int can_read_again(const char *path)
 {

@@ -28,6 +28,26 @@ expect rejected 1 "bad.cert line 5: vertex 9 is not in the graph (N = 3) [vertex
 expect unusable 2 "loop.graph line 3: edge 1 1 joins vertex 1 to itself [self-loop]" \
     "$bin" check "$tmp/loop.graph" "$tmp/tri.cert"
 expect graph-stdin 0 "accepted: planar" sh -c "\"$bin\" check - \"$tmp/tri.cert\" <\"$tmp/tri.graph\""
+
+# ---- a graph file over 4 MiB: check keeps one heap on huge pages (cli/heap.c) ----
+# Speed only: the verdict must be the one given for the same bytes from standard
+# input, where that memory policy is not used, for a certificate that holds and for
+# one that does not.  A 420 x 420 grid and a rotation system of it (grid_pair.awk):
+# F = E - V + 2 = 351960 - 176400 + 2 = 175562 faces (Euler's polyhedron formula).
+# In the broken copy two neighbours of vertex 421 (inside the grid) change places,
+# which merges faces: two fewer, so V - E + F = 0.
+awk -v R=420 -v C=420 -v G="$tmp/big.graph" -v K="$tmp/big.cert" -f "$(dirname "$0")/grid_pair.awk"
+awk '$1 == "around" && $2 == 421 { t = $4; $4 = $5; $5 = t } { print }' "$tmp/big.cert" >"$tmp/big-swapped.cert"
+[ "$(wc -c <"$tmp/big.graph")" -gt 4194304 ] && ok || bad "big.graph is not over 4 MiB"
+expect big-accepted 0 "176400 vertices, 351960 edges, 175562 faces, 1 component" \
+    "$bin" check "$tmp/big.graph" "$tmp/big.cert"
+expect big-swapped 1 "V - E + F = 176400 - 351960 + 175560 = 0, not 2 [euler]" \
+    "$bin" check "$tmp/big.graph" "$tmp/big-swapped.cert"
+for c in big big-swapped; do
+    "$bin" check --json "$tmp/big.graph" "$tmp/$c.cert" | sed 's/"path":"[^"]*"//' >"$tmp/$c-file.json"
+    "$bin" check --json - "$tmp/$c.cert" <"$tmp/big.graph" | sed 's/"path":"[^"]*"//' >"$tmp/$c-stdin.json"
+    cmp -s "$tmp/$c-file.json" "$tmp/$c-stdin.json" && ok || bad "$c: the record depends on the memory policy"
+done
 expect cert-stdin 1 "<stdin> line 5" sh -c "\"$bin\" check \"$tmp/tri.graph\" - <\"$tmp/bad.cert\""
 expect json-accepted 0 '"verdict":"accepted","exit_code":0,"claim":"planar","witness":"rotation-system"' \
     "$bin" check "$tmp/tri.graph" "$tmp/tri.cert" --json

@@ -101,11 +101,8 @@ expect_exit 0 "$bin" check "$tmp/big.graph" "$tmp/big.cert"
 
 # ---- a graph file over 4 MiB: draw then keeps one heap on huge pages (cli/heap.c) ----
 # Speed only: the certificate must be byte for byte the one drawn from standard input,
-# where that memory policy is not used.  A 420 x 420 grid, 352,380 edges.
-awk 'BEGIN { k = 420; print "graph", k * k, 2 * k * (k - 1)
-             for (r = 0; r < k; r++) for (c = 0; c < k; c++) {
-                 v = r * k + c; if (c + 1 < k) print v, v + 1; if (r + 1 < k) print v, v + k } }' \
-    > "$tmp/huge.graph"
+# where that memory policy is not used.  A 420 x 420 grid (grid_pair.awk), 351,960 edges.
+awk -v R=420 -v C=420 -v G="$tmp/huge.graph" -v K="$tmp/huge-grid.cert" -f "$(dirname "$0")/grid_pair.awk"
 [ "$(wc -c < "$tmp/huge.graph")" -gt 4194304 ] && ok || bad "huge.graph is not over 4 MiB"
 expect_exit 0 "$bin" draw "$tmp/huge.graph" -o "$tmp/huge.cert"
 expect_exit 0 "$bin" draw - -o "$tmp/huge-stdin.cert" < "$tmp/huge.graph"
