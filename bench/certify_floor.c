@@ -17,11 +17,13 @@
  *           with a "darts of a vertex side by side" layout would pay first);
  *   dfs2    the same bare search again on the relabelled adjacency.
  * Each figure, parse included, is the median of ROUNDS runs (default 3) in
- * this one process.
+ * this one process, under certify's memory policy (cli/heap.c) for the sizes
+ * where certify uses it, so that floors and phases are timed alike.
  *
  * Usage: certify_floor GRAPH [ROUNDS] -> one line of key=value pairs (seconds).
  */
 #include "bench_util.h"
+#include "cli.h"
 #include "planewit.h"
 
 #include <stdlib.h>
@@ -115,6 +117,7 @@ int main(int argc, char **argv)
     int rounds = argc == 3 ? atoi(argv[2]) : 3;
     if (rounds < 1 || rounds > MAX_ROUNDS)
         bench_fail("ROUNDS must be 1 to 15");
+    cli_heap_for_one_job(argv[1], CLI_ONE_JOB_HEAP_LARGEST);
     size_t len = 0;
     char *text = bench_slurp(argv[1], &len);
     pw_limits lim;
