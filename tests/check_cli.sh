@@ -34,8 +34,10 @@ expect graph-stdin 0 "accepted: planar" sh -c "\"$bin\" check - \"$tmp/tri.cert\
 # input, where that memory policy is not used, for a certificate that holds and for
 # one that does not.  A 420 x 420 grid and a rotation system of it (grid_pair.awk):
 # F = E - V + 2 = 351960 - 176400 + 2 = 175562 faces (Euler's polyhedron formula).
-# In the broken copy two neighbours of vertex 421 (inside the grid) change places,
-# which merges faces: two fewer, so V - E + F = 0.
+# In the broken copy vertex 421 (inside the grid) lists its first two neighbours,
+# right (422) and up (1), the other way round: then only the square between left and
+# down keeps its corner at 421, and the walks of the other three squares join into one
+# face, two fewer, so V - E + F = 0 (a rotation system's faces then lie on a torus).
 awk -v R=420 -v C=420 -v G="$tmp/big.graph" -v K="$tmp/big.cert" -f "$(dirname "$0")/grid_pair.awk"
 awk '$1 == "around" && $2 == 421 { t = $4; $4 = $5; $5 = t } { print }' "$tmp/big.cert" >"$tmp/big-swapped.cert"
 [ "$(wc -c <"$tmp/big.graph")" -gt 4194304 ] && ok || bad "big.graph is not over 4 MiB"
