@@ -3,7 +3,8 @@
 # function (bench/tools.sh), and still measure what `planewit` does: a
 # benchmark that no longer links, or times something else than the shipped
 # binary, would report figures about nothing.  (bench-draw once stopped
-# linking unnoticed, because nothing in the suite built it.)  Small inputs only: no timing is asserted.
+# linking unnoticed, because nothing in the suite built it.)  Small inputs
+# only: no timing is asserted.
 # Usage: tests/check_bench_tools.sh BUILD_DIR
 set -u
 build=${1:-build}

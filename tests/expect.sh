@@ -51,6 +51,15 @@ expect() {
     fi
 }
 
+# policy_grid GRAPH CERT: a 420 x 420 grid (351,960 edges) and a rotation system of it
+# (grid_pair.awk), in a graph file over 4 MiB: the size from which certify, check and
+# draw keep one heap on huge pages (cli/heap.c).  Their tests give the same bytes on
+# standard input, where that memory policy is not used, and compare what they write.
+policy_grid() {
+    awk -v R=420 -v C=420 -v G="$1" -v K="$2" -f "$(dirname "$0")/grid_pair.awk"
+    [ "$(wc -c <"$1")" -gt 4194304 ] && ok || bad "$1 is not over 4 MiB"
+}
+
 # finish NAME: the script's summary line and exit status.
 finish() {
     echo "$1: $pass passed, $fail failed"
