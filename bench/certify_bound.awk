@@ -1,5 +1,5 @@
 # Renders bench/certify_bound.sh's raw lines into bench/results-certify-bound.md.
-# Input: "time family=F n=N m=M parse= gather= dfs= relabel= dfs2= algorithm="
+# Input: "time family=F n=N m=M parse= gather= dfs= ahead= relabel= dfs2= algorithm="
 #        "work family=F m=M parse= algorithm= text= selfcheck=" (instructions)
 function kv(line,    i, pair) {
     delete v
@@ -11,7 +11,7 @@ $1 == "time" {
     kv($0); f = v["family"]; m = v["m"] + 0
     if (!(f in seen_f)) { seen_f[f] = 1; fam[++nf] = f }
     k = f SUBSEP m; rows[++nt] = k; tm[k] = m; tn[k] = v["n"]
-    for (c = 1; c <= 6; c++) t[k, col[c]] = v[col[c]] + 0
+    for (c = 1; c <= ncol; c++) t[k, col[c]] = v[col[c]] + 0
     if (!(f in small) || m < small[f]) small[f] = m
     if (!(f in large) || m > large[f]) large[f] = m
 }
@@ -23,7 +23,7 @@ $1 == "work" {
     if (!(f in wlarge) || m > wlarge[f]) wlarge[f] = m
 }
 BEGIN {
-    split("parse gather dfs relabel dfs2 algorithm", col, " ")
+    ncol = split("parse gather dfs ahead relabel dfs2 algorithm", col, " ")
     split("parse algorithm text selfcheck", wcol, " ")
 }
 END {
@@ -38,17 +38,21 @@ END {
     print ""
     print "*parse*: the kernel's pw_graph_parse. *gather*: every dart's neighbour, in adjacency"
     print "order. *dfs*: a bare depth-first numbering (number and parent only) on the shuffled"
-    print "ids. *relabel*: the adjacency rebuilt with depth-first numbers as ids, each vertex's"
-    print "darts together. *dfs2*: the bare search again on the relabelled adjacency."
+    print "ids. *ahead*: the same search with the look-ups of the next 3 neighbours started early,"
+    print "as certify's own search does (the two take turns going first). *floor*: gather plus"
+    print "the faster of dfs and ahead. *relabel*: the adjacency rebuilt with depth-first numbers"
+    print "as ids, each vertex's darts together. *dfs2*: the bare search again on the relabelled"
+    print "adjacency."
     print "*algorithm*: certify's pp_certify (bench/certify_phases.c), run in the same session."
     print ""
-    print "| family | N | M | parse | gather | dfs | relabel | dfs2 | algorithm | (gather+dfs) / parse | algorithm / parse | algorithm / (gather+dfs) | dfs / dfs2 |"
-    print "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|"
+    print "| family | N | M | parse | gather | dfs | ahead | relabel | dfs2 | algorithm | floor / parse | algorithm / parse | algorithm / floor | dfs / dfs2 |"
+    print "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|---:|"
     for (i = 1; i <= nt; i++) {
         k = rows[i]; split(k, fk, SUBSEP)
-        floor = t[k, "gather"] + t[k, "dfs"]
-        printf "| %s | %s | %s | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %s | %s | %s | %s |\n", fk[1], tn[k], tm[k],
-            t[k, "parse"], t[k, "gather"], t[k, "dfs"], t[k, "relabel"], t[k, "dfs2"], t[k, "algorithm"],
+        floor = t[k, "gather"] + (t[k, "ahead"] < t[k, "dfs"] ? t[k, "ahead"] : t[k, "dfs"])
+        printf "| %s | %s | %s | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %s | %s | %s | %s |\n", fk[1], tn[k],
+            tm[k], t[k, "parse"], t[k, "gather"], t[k, "dfs"], t[k, "ahead"], t[k, "relabel"], t[k, "dfs2"],
+            t[k, "algorithm"],
             ratio(floor, t[k, "parse"]), ratio(t[k, "algorithm"], t[k, "parse"]),
             ratio(t[k, "algorithm"], floor), ratio(t[k, "dfs"], t[k, "dfs2"])
     }
@@ -57,13 +61,13 @@ END {
     print ""
     print "The scaling target of issue 3 asks for at most 1.5 (10^7 over 10^5 edges)."
     print ""
-    print "| family | M from | M to | parse | gather | dfs | relabel | dfs2 | algorithm |"
-    print "|---|---:|---:|---:|---:|---:|---:|---:|---:|"
+    print "| family | M from | M to | parse | gather | dfs | ahead | relabel | dfs2 | algorithm |"
+    print "|---|---:|---:|---:|---:|---:|---:|---:|---:|---:|"
     for (j = 1; j <= nf; j++) {
         f = fam[j]; a = f SUBSEP small[f]; b = f SUBSEP large[f]
         if (small[f] == large[f]) continue
         line = sprintf("| %s | %s | %s |", f, small[f], large[f])
-        for (c = 1; c <= 6; c++)
+        for (c = 1; c <= ncol; c++)
             line = line " " ratio(per_edge(t[b, col[c]], large[f]), per_edge(t[a, col[c]], small[f])) " |"
         print line
     }

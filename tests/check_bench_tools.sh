@@ -38,9 +38,11 @@ for family in stacked stacked+1; do
     expect "phases-verdict-$family" 0 "verdict=accepted" cat "$tmp/$family.line"
 done
 
-# certify_floor checks itself (the search on the relabelled adjacency must
-# number every vertex as the first search did) and prints every figure.
+# certify_floor checks itself (the search that fetches ahead, and the one on
+# the relabelled adjacency, must number every vertex as the plain search did)
+# and prints every figure; two rounds, so that each search once goes first.
 expect floor-runs 0 "dfs2=" "$tmp/certify_floor" "$tmp/stacked.graph" 1
+expect floor-runs-both-orders 0 " ahead=" "$tmp/certify_floor" "$tmp/stacked.graph" 2
 expect floor-refuses-bad-rounds 2 "ROUNDS must be 1 to 15" "$tmp/certify_floor" "$tmp/stacked.graph" 0
 
 finish check_bench_tools
