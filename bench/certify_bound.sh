@@ -7,7 +7,9 @@
 #     adjacency relabelled in depth-first order, and the bare search again on
 #     it; beside certify's algorithm phase (bench/certify_phases.c), interleaved
 #     in one session.  Both published linear-time planarity methods start from
-#     such a search, so its time per edge is a floor for theirs.
+#     such a search, so its time per edge is a floor for theirs.  The same
+#     program also times certify's engine on the graph as parsed and on a copy
+#     with depth-first ids, which is what building such a copy would buy.
 #  2. Work, counted: instructions executed per edge in parse, algorithm, text
 #     and self-check, from valgrind's callgrind (inclusive counts of
 #     pw_graph_parse, pp_certify, pp_cert_text, pw_check_parsed).  A count

@@ -19,7 +19,14 @@
  *   relabel the adjacency rebuilt with depth-first numbers as ids and each
  *           vertex's darts stored together in that order (what a producer
  *           with a "darts of a vertex side by side" layout would pay first);
- *   dfs2    the same bare search again on the relabelled adjacency.
+ *   dfs2    the same bare search again on the relabelled adjacency;
+ * and what certify's engine would gain from such a copy, measured rather than
+ * guessed, in the same process and taking turns:
+ *   given   pp_certify on the graph as parsed;
+ *   copy    a graph built from the relabelled adjacency: depth-first numbers
+ *           as ids, and edges numbered in that order, so that the darts of
+ *           nearby vertices have nearby ids;
+ *   dfids   pp_certify on that copy (both verdicts must agree).
  * Each figure, parse included, is the median of ROUNDS runs (default 3) in
  * this one process, under certify's memory policy (cli/heap.c) for the sizes
  * where certify uses it, so that floors and phases are timed alike.
@@ -27,6 +34,7 @@
  * Usage: certify_floor GRAPH [ROUNDS] -> one line of key=value pairs (seconds).
  */
 #include "bench_util.h"
+#include "certify.h"
 #include "cli.h"
 #include "planewit.h"
 #include "pp_state.h" /* PP_PREFETCH, as certify's search uses it */
@@ -119,6 +127,38 @@ static void relabel(const pw_graph *g, const uint32_t *nbr, const uint32_t *dfi,
     }
 }
 
+/* The graph of a relabelled adjacency (first2, nbr2), each edge numbered once
+   at its end with the smaller id, in id order; the kernel's own grouping then
+   lays out every vertex's darts. */
+static void depth_first_copy(const pw_graph *g, const uint32_t *first2, const uint32_t *nbr2,
+                             pw_graph *copy)
+{
+    uint32_t e = 0;
+    for (uint32_t x = 0; x < g->n_adj; x++)
+        for (uint32_t i = first2[x]; i < first2[x + 1]; i++)
+            if (nbr2[i] > x) {
+                copy->ends[2 * (size_t)e] = x;
+                copy->ends[2 * (size_t)e + 1] = nbr2[i];
+                e++;
+            }
+    if (e != g->m)
+        bench_fail("the copy lost or gained edges");
+    pw_graph_group_darts(copy);
+}
+
+/* Seconds one pp_certify takes; its kind of result in *kind. */
+static double time_engine(const pw_graph *g, pp_kind *kind)
+{
+    pp_result res;
+    double t0 = bench_now();
+    if (pp_certify(g, &res) != 0)
+        bench_fail("pp_certify failed");
+    double t1 = bench_now();
+    *kind = res.kind;
+    pp_result_free(&res);
+    return t1 - t0;
+}
+
 static int by_value(const void *a, const void *b)
 {
     double x = *(const double *)a, y = *(const double *)b;
@@ -160,7 +200,7 @@ int main(int argc, char **argv)
     uint32_t *nbr = must_alloc(darts, 4), *nbr2 = must_alloc(darts, 4);
     uint32_t *dfi = must_alloc(n, 4), *parent = must_alloc(n, 4), *iter = must_alloc(n, 4);
     uint32_t *stack = must_alloc(n, 4), *first2 = must_alloc(n + 1, 4), *dfi2 = must_alloc(n, 4);
-    double t[5][MAX_ROUNDS];
+    double t[8][MAX_ROUNDS];
     for (int r = 0; r < rounds; r++) {
         double a = bench_now();
         gather(&g, nbr);
@@ -186,8 +226,35 @@ int main(int argc, char **argv)
     for (uint32_t x = 0; x < g.n_adj; x++) /* a search in DFI order numbers in DFI order */
         if (dfi2[x] != x)
             bench_fail("the relabelled search disagrees with the first");
-    printf("n=%u m=%u parse=%.4f gather=%.4f dfs=%.4f ahead=%.4f relabel=%.4f dfs2=%.4f\n", g.n_adj,
-           g.m, median(parse, rounds), median(t[0], rounds), median(t[1], rounds),
-           median(t[2], rounds), median(t[3], rounds), median(t[4], rounds));
+    free(nbr);
+    free(dfi);
+    free(dfi2);
+    free(parent);
+    free(iter);
+    free(stack);
+    pw_graph copy = {.n_adj = g.n_adj, .m = g.m};
+    copy.ends = must_alloc(darts, 4);
+    copy.darts = must_alloc(darts, 4);
+    copy.first = must_alloc(n + 1, 4);
+    for (int r = 0; r < rounds; r++) {
+        double a = bench_now();
+        depth_first_copy(&g, first2, nbr2, &copy);
+        t[5][r] = bench_now() - a;
+        pp_kind kind_given, kind_copy;
+        if (r % 2) {
+            t[7][r] = time_engine(&copy, &kind_copy);
+            t[6][r] = time_engine(&g, &kind_given);
+        } else {
+            t[6][r] = time_engine(&g, &kind_given);
+            t[7][r] = time_engine(&copy, &kind_copy);
+        }
+        if ((kind_given == PP_PLANAR) != (kind_copy == PP_PLANAR))
+            bench_fail("certify's verdicts on the graph and on its copy differ");
+    }
+    printf("n=%u m=%u parse=%.4f gather=%.4f dfs=%.4f ahead=%.4f relabel=%.4f dfs2=%.4f given=%.4f "
+           "copy=%.4f dfids=%.4f\n",
+           g.n_adj, g.m, median(parse, rounds), median(t[0], rounds), median(t[1], rounds),
+           median(t[2], rounds), median(t[3], rounds), median(t[4], rounds), median(t[6], rounds),
+           median(t[5], rounds), median(t[7], rounds));
     return 0;
 }

@@ -39,10 +39,13 @@ for family in stacked stacked+1; do
 done
 
 # certify_floor checks itself (the search that fetches ahead, and the one on
-# the relabelled adjacency, must number every vertex as the plain search did)
-# and prints every figure; two rounds, so that each search once goes first.
+# the relabelled adjacency, must number every vertex as the plain search did;
+# certify's engine must reach the same verdict on the graph and on its
+# depth-first copy) and prints every figure; two rounds, so that each search
+# and each engine run once goes first; a planar and a non-planar family.
 expect floor-runs 0 "dfs2=" "$tmp/certify_floor" "$tmp/stacked.graph" 1
-expect floor-runs-both-orders 0 " ahead=" "$tmp/certify_floor" "$tmp/stacked.graph" 2
+expect floor-runs-both-orders 0 " dfids=" "$tmp/certify_floor" "$tmp/stacked.graph" 2
+expect floor-runs-non-planar 0 " dfids=" "$tmp/certify_floor" "$tmp/stacked+1.graph" 2
 expect floor-refuses-bad-rounds 2 "ROUNDS must be 1 to 15" "$tmp/certify_floor" "$tmp/stacked.graph" 0
 
 finish check_bench_tools
