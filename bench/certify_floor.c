@@ -171,10 +171,81 @@ static double median(double *t, int k)
     return t[k / 2];
 }
 
+enum { MAX_ROUNDS = 15, FIGURES = 8 };
+enum { GATHER, DFS, AHEAD_DFS, RELABEL, DFS2, COPY, GIVEN, DFIDS }; /* rows of the times */
+
+/* Times the gather and the searches, `rounds` times; leaves the relabelled
+   adjacency in (first2, nbr2) for the engine's copy. */
+static void time_searches(const pw_graph *g, int rounds, uint32_t *first2, uint32_t *nbr2,
+                          double t[FIGURES][MAX_ROUNDS])
+{
+    size_t darts = 2 * (size_t)g->m, n = g->n_adj;
+    uint32_t *nbr = must_alloc(darts, 4), *dfi = must_alloc(n, 4), *dfi2 = must_alloc(n, 4);
+    uint32_t *parent = must_alloc(n, 4), *iter = must_alloc(n, 4), *stack = must_alloc(n, 4);
+    for (int r = 0; r < rounds; r++) {
+        double a = bench_now();
+        gather(g, nbr);
+        double b = bench_now();
+        /* The two searches take turns going first, so that neither is always
+           the one that finds the caches warmed by the other. */
+        uint32_t first_ahead = r % 2 ? AHEAD : 0, then_ahead = r % 2 ? 0 : AHEAD;
+        bare_dfs(g->n_adj, g->first, nbr, dfi, parent, iter, stack, first_ahead);
+        double c = bench_now();
+        bare_dfs(g->n_adj, g->first, nbr, dfi2, parent, iter, stack, then_ahead);
+        double c2 = bench_now();
+        for (uint32_t v = 0; v < g->n_adj; v++)
+            if (dfi2[v] != dfi[v])
+                bench_fail("the search that fetches ahead disagrees with the plain one");
+        double c3 = bench_now();
+        relabel(g, nbr, dfi, first2, nbr2);
+        double d = bench_now();
+        bare_dfs(g->n_adj, first2, nbr2, dfi2, parent, iter, stack, 0);
+        double e = bench_now();
+        t[GATHER][r] = b - a, t[r % 2 ? AHEAD_DFS : DFS][r] = c - b;
+        t[r % 2 ? DFS : AHEAD_DFS][r] = c2 - c, t[RELABEL][r] = d - c3, t[DFS2][r] = e - d;
+    }
+    for (uint32_t x = 0; x < g->n_adj; x++) /* a search in DFI order numbers in DFI order */
+        if (dfi2[x] != x)
+            bench_fail("the relabelled search disagrees with the first");
+    free(nbr);
+    free(dfi);
+    free(dfi2);
+    free(parent);
+    free(iter);
+    free(stack);
+}
+
+/* Times the copy with depth-first ids and certify's engine on it and on the
+   graph as parsed, the two engine runs taking turns. */
+static void time_copy(const pw_graph *g, int rounds, const uint32_t *first2, const uint32_t *nbr2,
+                      double t[FIGURES][MAX_ROUNDS])
+{
+    size_t darts = 2 * (size_t)g->m;
+    pw_graph copy = {.n_adj = g->n_adj, .m = g->m};
+    copy.ends = must_alloc(darts, 4);
+    copy.darts = must_alloc(darts, 4);
+    copy.first = must_alloc((size_t)g->n_adj + 1, 4);
+    for (int r = 0; r < rounds; r++) {
+        double a = bench_now();
+        depth_first_copy(g, first2, nbr2, &copy);
+        t[COPY][r] = bench_now() - a;
+        pp_kind kind_given, kind_copy;
+        if (r % 2) {
+            t[DFIDS][r] = time_engine(&copy, &kind_copy);
+            t[GIVEN][r] = time_engine(g, &kind_given);
+        } else {
+            t[GIVEN][r] = time_engine(g, &kind_given);
+            t[DFIDS][r] = time_engine(&copy, &kind_copy);
+        }
+        if ((kind_given == PP_PLANAR) != (kind_copy == PP_PLANAR))
+            bench_fail("certify's verdicts on the graph and on its copy differ");
+    }
+    pw_graph_free(&copy);
+}
+
 int main(int argc, char **argv)
 {
     bench_tool = "certify_floor";
-    enum { MAX_ROUNDS = 15 };
     if (argc < 2 || argc > 3)
         bench_fail("usage: certify_floor GRAPH [ROUNDS]");
     int rounds = argc == 3 ? atoi(argv[2]) : 3;
@@ -196,65 +267,14 @@ int main(int argc, char **argv)
             bench_fail("the graph does not parse");
         parse[r] = bench_now() - t0;
     }
-    size_t darts = 2 * (size_t)g.m, n = g.n_adj;
-    uint32_t *nbr = must_alloc(darts, 4), *nbr2 = must_alloc(darts, 4);
-    uint32_t *dfi = must_alloc(n, 4), *parent = must_alloc(n, 4), *iter = must_alloc(n, 4);
-    uint32_t *stack = must_alloc(n, 4), *first2 = must_alloc(n + 1, 4), *dfi2 = must_alloc(n, 4);
-    double t[8][MAX_ROUNDS];
-    for (int r = 0; r < rounds; r++) {
-        double a = bench_now();
-        gather(&g, nbr);
-        double b = bench_now();
-        /* The two searches take turns going first, so that neither is always
-           the one that finds the caches warmed by the other. */
-        uint32_t first_ahead = r % 2 ? AHEAD : 0, then_ahead = r % 2 ? 0 : AHEAD;
-        bare_dfs(g.n_adj, g.first, nbr, dfi, parent, iter, stack, first_ahead);
-        double c = bench_now();
-        bare_dfs(g.n_adj, g.first, nbr, dfi2, parent, iter, stack, then_ahead);
-        double c2 = bench_now();
-        for (uint32_t v = 0; v < g.n_adj; v++)
-            if (dfi2[v] != dfi[v])
-                bench_fail("the search that fetches ahead disagrees with the plain one");
-        double c3 = bench_now();
-        relabel(&g, nbr, dfi, first2, nbr2);
-        double d = bench_now();
-        bare_dfs(g.n_adj, first2, nbr2, dfi2, parent, iter, stack, 0);
-        double e = bench_now();
-        t[0][r] = b - a, t[r % 2 ? 2 : 1][r] = c - b, t[r % 2 ? 1 : 2][r] = c2 - c;
-        t[3][r] = d - c3, t[4][r] = e - d;
-    }
-    for (uint32_t x = 0; x < g.n_adj; x++) /* a search in DFI order numbers in DFI order */
-        if (dfi2[x] != x)
-            bench_fail("the relabelled search disagrees with the first");
-    free(nbr);
-    free(dfi);
-    free(dfi2);
-    free(parent);
-    free(iter);
-    free(stack);
-    pw_graph copy = {.n_adj = g.n_adj, .m = g.m};
-    copy.ends = must_alloc(darts, 4);
-    copy.darts = must_alloc(darts, 4);
-    copy.first = must_alloc(n + 1, 4);
-    for (int r = 0; r < rounds; r++) {
-        double a = bench_now();
-        depth_first_copy(&g, first2, nbr2, &copy);
-        t[5][r] = bench_now() - a;
-        pp_kind kind_given, kind_copy;
-        if (r % 2) {
-            t[7][r] = time_engine(&copy, &kind_copy);
-            t[6][r] = time_engine(&g, &kind_given);
-        } else {
-            t[6][r] = time_engine(&g, &kind_given);
-            t[7][r] = time_engine(&copy, &kind_copy);
-        }
-        if ((kind_given == PP_PLANAR) != (kind_copy == PP_PLANAR))
-            bench_fail("certify's verdicts on the graph and on its copy differ");
-    }
+    uint32_t *first2 = must_alloc((size_t)g.n_adj + 1, 4), *nbr2 = must_alloc(2 * (size_t)g.m, 4);
+    double t[FIGURES][MAX_ROUNDS];
+    time_searches(&g, rounds, first2, nbr2, t);
+    time_copy(&g, rounds, first2, nbr2, t);
     printf("n=%u m=%u parse=%.4f gather=%.4f dfs=%.4f ahead=%.4f relabel=%.4f dfs2=%.4f given=%.4f "
            "copy=%.4f dfids=%.4f\n",
-           g.n_adj, g.m, median(parse, rounds), median(t[0], rounds), median(t[1], rounds),
-           median(t[2], rounds), median(t[3], rounds), median(t[4], rounds), median(t[6], rounds),
-           median(t[5], rounds), median(t[7], rounds));
+           g.n_adj, g.m, median(parse, rounds), median(t[GATHER], rounds), median(t[DFS], rounds),
+           median(t[AHEAD_DFS], rounds), median(t[RELABEL], rounds), median(t[DFS2], rounds),
+           median(t[GIVEN], rounds), median(t[COPY], rounds), median(t[DFIDS], rounds));
     return 0;
 }
