@@ -46,8 +46,9 @@ END {
     print ""
     print "*parse*: the kernel's pw_graph_parse. *gather*: every dart's neighbour, in adjacency"
     print "order. *dfs*: a bare depth-first numbering (number and parent only) on the shuffled"
-    print "ids. *ahead*: the same search with the look-ups of the next 3 neighbours started early,"
-    print "as certify's own search does (the two take turns going first). *floor*: gather plus"
+    print "ids. *ahead*: the same search with the look-ups of the next 3 neighbours started early"
+    print "(their numbers, as certify's own search does, and where their adjacency starts; the two"
+    print "searches take turns going first). *floor*: gather plus"
     print "the faster of dfs and ahead. *relabel*: the adjacency rebuilt with depth-first numbers"
     print "as ids, each vertex's darts together. *dfs2*: the bare search again on the relabelled"
     print "adjacency."
@@ -56,10 +57,9 @@ END {
     head("family|N|M|parse|gather|dfs|ahead|relabel|dfs2|algorithm|floor / parse|algorithm / parse|algorithm / floor|dfs / dfs2")
     for (i = 1; i <= nt; i++) {
         k = rows[i]; split(k, fk, SUBSEP); floor = floor_of(k)
-        printf "| %s | %s | %s | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %s | %s | %s | %s |\n", fk[1], tn[k],
-            tm[k], t[k, "parse"], t[k, "gather"], t[k, "dfs"], t[k, "ahead"], t[k, "relabel"], t[k, "dfs2"],
-            t[k, "algorithm"],
-            ratio(floor, t[k, "parse"]), ratio(t[k, "algorithm"], t[k, "parse"]),
+        printf "| %s | %s | %s | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %.4f | %s | %s | %s | %s |\n",
+            fk[1], tn[k], tm[k], t[k, "parse"], t[k, "gather"], t[k, "dfs"], t[k, "ahead"], t[k, "relabel"],
+            t[k, "dfs2"], t[k, "algorithm"], ratio(floor, t[k, "parse"]), ratio(t[k, "algorithm"], t[k, "parse"]),
             ratio(t[k, "algorithm"], floor), ratio(t[k, "dfs"], t[k, "dfs2"])
     }
     print ""

@@ -3,13 +3,14 @@
 # benchmark, measured two ways that do not depend on certify's own code paths.
 #  1. Floors, timed (bench/certify_floor.c): the kernel's parse, one gather of
 #     every dart's neighbour, a bare depth-first numbering on the shuffled ids
-#     (plain, and fetching ahead as certify's own search does), the same
-#     adjacency relabelled in depth-first order, and the bare search again on
-#     it; beside certify's algorithm phase (bench/certify_phases.c), interleaved
-#     in one session.  Both published linear-time planarity methods start from
-#     such a search, so its time per edge is a floor for theirs.  The same
-#     program also times certify's engine on the graph as parsed and on a copy
-#     with depth-first ids, which is what building such a copy would buy.
+#     (plain, and fetching ahead at least as eagerly as certify's own search
+#     does), the same adjacency relabelled in depth-first order, and the bare
+#     search again on it; beside certify's algorithm phase
+#     (bench/certify_phases.c), interleaved in one session.  Both published
+#     linear-time planarity methods start from such a search, so its time per
+#     edge is a floor for theirs.  The same program also times certify's engine
+#     on the graph as parsed and on a copy with depth-first ids, which is what
+#     building such a copy would buy.
 #  2. Work, counted: instructions executed per edge in parse, algorithm, text
 #     and self-check, from valgrind's callgrind (inclusive counts of
 #     pw_graph_parse, pp_certify, pp_cert_text, pw_check_parsed).  A count

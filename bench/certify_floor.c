@@ -13,9 +13,10 @@
  *   dfs     a bare iterative depth-first numbering over those neighbours
  *           (number and parent only: no lowpoints, no pieces);
  *   ahead   the same search, with the look-ups of the next few neighbours
- *           (their numbers and where their adjacency starts) started early,
- *           as certify's own search does: a floor must not be slower than
- *           what certify already does, or it bounds nothing;
+ *           started early at certify's distance: their numbers, as certify's
+ *           own search does, and also where their adjacency starts, and the
+ *           first few at once on reaching a vertex.  A floor must not do less
+ *           than what certify already does, or it bounds nothing;
  *   relabel the adjacency rebuilt with depth-first numbers as ids and each
  *           vertex's darts stored together in that order (what a producer
  *           with a "darts of a vertex side by side" layout would pay first);
@@ -37,12 +38,11 @@
 #include "certify.h"
 #include "cli.h"
 #include "planewit.h"
-#include "pp_state.h" /* PP_PREFETCH, as certify's search uses it */
+#include "pp_state.h" /* PP_PREFETCH and PP_SEARCH_AHEAD, as certify's search uses them */
 
 #include <stdlib.h>
 
 #define NONE UINT32_MAX
-#define AHEAD 3 /* as in certify's own search (producer/dfs.c) */
 
 static void *must_alloc(size_t count, size_t size)
 {
@@ -130,18 +130,17 @@ static void relabel(const pw_graph *g, const uint32_t *nbr, const uint32_t *dfi,
 /* The graph of a relabelled adjacency (first2, nbr2), each edge numbered once
    at its end with the smaller id, in id order; the kernel's own grouping then
    lays out every vertex's darts. */
-static void depth_first_copy(const pw_graph *g, const uint32_t *first2, const uint32_t *nbr2,
-                             pw_graph *copy)
+static void depth_first_copy(const uint32_t *first2, const uint32_t *nbr2, pw_graph *copy)
 {
     uint32_t e = 0;
-    for (uint32_t x = 0; x < g->n_adj; x++)
+    for (uint32_t x = 0; x < copy->n_adj; x++)
         for (uint32_t i = first2[x]; i < first2[x + 1]; i++)
             if (nbr2[i] > x) {
                 copy->ends[2 * (size_t)e] = x;
                 copy->ends[2 * (size_t)e + 1] = nbr2[i];
                 e++;
             }
-    if (e != g->m)
+    if (e != copy->m)
         bench_fail("the copy lost or gained edges");
     pw_graph_group_darts(copy);
 }
@@ -188,7 +187,8 @@ static void time_searches(const pw_graph *g, int rounds, uint32_t *first2, uint3
         double b = bench_now();
         /* The two searches take turns going first, so that neither is always
            the one that finds the caches warmed by the other. */
-        uint32_t first_ahead = r % 2 ? AHEAD : 0, then_ahead = r % 2 ? 0 : AHEAD;
+        uint32_t first_ahead = r % 2 ? PP_SEARCH_AHEAD : 0;
+        uint32_t then_ahead = r % 2 ? 0 : PP_SEARCH_AHEAD;
         bare_dfs(g->n_adj, g->first, nbr, dfi, parent, iter, stack, first_ahead);
         double c = bench_now();
         bare_dfs(g->n_adj, g->first, nbr, dfi2, parent, iter, stack, then_ahead);
@@ -227,7 +227,7 @@ static void time_copy(const pw_graph *g, int rounds, const uint32_t *first2, con
     copy.first = must_alloc((size_t)g->n_adj + 1, 4);
     for (int r = 0; r < rounds; r++) {
         double a = bench_now();
-        depth_first_copy(g, first2, nbr2, &copy);
+        depth_first_copy(first2, nbr2, &copy);
         t[COPY][r] = bench_now() - a;
         pp_kind kind_given, kind_copy;
         if (r % 2) {

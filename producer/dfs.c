@@ -8,8 +8,6 @@
  */
 #include "pp_state.h"
 
-#define AHEAD 3 /* darts looked up ahead of the one being examined */
-
 static uint32_t min_u32(uint32_t a, uint32_t b) { return a < b ? a : b; }
 
 /* The piece of tree edge p -> x: virtual root n + x joined to x only. */
@@ -58,8 +56,8 @@ static void search_from(pp_state *s, uint32_t root, uint32_t *next_dfi, uint32_t
         uint32_t x = work[top - 1], p = s->parent[x], low = s->least_anc[x];
         uint32_t i = iter[x], end = g->first[s->vertex_of[x] + 1], fresh = PP_NIL;
         for (; i < end; i++) {
-            if (i + AHEAD < end)
-                PP_PREFETCH(&s->dfi_of[nbr[i + AHEAD]]);
+            if (i + PP_SEARCH_AHEAD < end)
+                PP_PREFETCH(&s->dfi_of[nbr[i + PP_SEARCH_AHEAD]]);
             uint32_t y = s->dfi_of[nbr[i]];
             if (y == PP_NIL) {
                 fresh = i++;

@@ -34,6 +34,7 @@
 #define PP_PREFETCH(p) ((void)0)
 #endif
 #define PP_AHEAD 8 /* how far ahead, in list entries or vertices */
+#define PP_SEARCH_AHEAD 3 /* the depth-first search: darts looked up ahead of the one examined */
 
 typedef struct {
     const pw_graph *g;
