@@ -26,7 +26,7 @@ SUPPORT_OBJ  := $(TEST_SUPPORT:%.c=$(BUILD)/%.o)
 LIBKERNEL := $(BUILD)/libplanewit-check.a
 BIN       := $(BUILD)/planewit
 
-.PHONY: all check test kernel-size clean help demo qualify bench-batch bench-draw bench-geng10 bench-certify bench-certify-bound
+.PHONY: all check test kernel-size clean help demo qualify bench-batch bench-draw bench-geng10 bench-certify bench-certify-bound bench-certify-profile
 all: $(BIN) kernel-size
 
 $(BUILD)/%.o: %.c
@@ -101,6 +101,11 @@ bench-certify: $(BIN) $(LIBKERNEL)
 bench-certify-bound: $(BIN) $(LIBKERNEL)
 	sh bench/certify_bound.sh $(BUILD)
 
+# Where certify's time goes at 10^6 edges: perf samples by phase and function, page
+# faults, callgrind's instructions per function (bench/results-certify-profile.md).
+bench-certify-profile: $(BIN) $(LIBKERNEL)
+	sh bench/certify_profile.sh $(BUILD)
+
 clean:
 	rm -rf $(BUILD)
 
@@ -113,6 +118,7 @@ help:
 	@echo "make bench-check  drawing check vs Boost, results in bench/results-check.md"
 	@echo "make bench-certify  certify vs Boost and networkx, 10^4-10^7 edges, bench/results-certify.md"
 	@echo "make bench-certify-bound  certify beside its floors, instructions per edge, bench/results-certify-bound.md"
+	@echo "make bench-certify-profile  where certify's time goes (perf, callgrind), bench/results-certify-profile.md"
 	@echo "make bench-geng10 all 12,005,168 graphs on 10 vertices through certify, bench/results-geng10.md"
 	@echo "make bench-draw   drawing at 10^6 edges vs Boost, results in bench/results-draw.md"
 	@echo "make clean      remove $(BUILD)/"

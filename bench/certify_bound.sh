@@ -37,11 +37,10 @@ out=${OUT:-bench/results-certify-bound.md}
 seed=20240603
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
-load_before=$(cut -d' ' -f1-3 /proc/loadavg)
-started=$(date +%s)
 
 command -v valgrind >/dev/null || apt-get install -y --no-install-recommends valgrind >/dev/null
 . bench/tools.sh
+bench_start
 for tool in certify_gen certify_floor certify_phases; do bench_build "$tool" "$work" "$build"; done
 
 median() { sort -g | awk '{ v[NR] = $1 } END { print v[int((NR + 1) / 2)] }'; }
@@ -73,9 +72,9 @@ count_one() { # FAMILY EDGES -> a "work" line
     cg="$work/cg-$1-$2"
     valgrind --tool=callgrind --callgrind-out-file="$cg" "$work/certify_phases" "$(graph "$1" "$2")" \
         "$cg.cert" >"$cg.line" 2>/dev/null
-    callgrind_annotate --inclusive=yes "$cg" |
+    callgrind_lines "$cg" yes |
         awk -v f="$1" -v m="$(field "$(cat "$cg.line")" m)" '
-            { fn = $0; sub(/ \[.*$/, "", fn); sub(/^.*:/, "", fn); ir = $1; gsub(/,/, "", ir) }
+            { fn = $1; ir = $2 }
             fn == "pw_graph_parse" { parse = ir } fn == "pp_certify" { alg = ir }
             fn == "pp_cert_text" { text = ir } fn == "pw_check_parsed" { check = ir }
             END { printf "work family=%s m=%s parse=%s algorithm=%s text=%s selfcheck=%s\n",
@@ -95,10 +94,4 @@ done
 wait
 for m in $work_sizes; do for f in $families; do cat "$work/w-$f-$m" >>"$work/raw"; done; done
 
-load_after=$(cut -d' ' -f1-3 /proc/loadavg)
-minutes=$(( ($(date +%s) - started + 59) / 60 ))
-awk -v date="$(date -u +%Y-%m-%d)" -v lb="$load_before" -v la="$load_after" -v min="$minutes" \
-    -v rounds="$rounds" -v cpu="$(nproc)" -v sizes="$sizes" -f bench/certify_bound.awk \
-    "$work/raw" >"$out.tmp"
-mv "$out.tmp" "$out"
-echo "wrote $out" >&2
+bench_render bench/certify_bound.awk "$work/raw" "$out" -v rounds="$rounds"

@@ -19,3 +19,35 @@ bench_build() {
 
 # field LINE KEY: the value of KEY=value in a line of key=value pairs.
 field() { printf '%s\n' "$1" | tr ' ' '\n' | sed -n "s/^$2=//p"; }
+
+# callgrind_lines FILE INCLUSIVE: "FUNCTION INSTRUCTIONS" for each function line of
+# callgrind_annotate's listing of FILE (INCLUSIVE yes or no), in its order.  One
+# function may come on several lines, one per source file its code came from.
+callgrind_lines() {
+    callgrind_annotate --inclusive="$2" --threshold=100 --auto=no "$1" |
+        awk '$1 ~ /^[0-9,]+$/ && $2 ~ /^\(/ && index($0, ":") {
+                 fn = $0; sub(/ \[.*$/, "", fn); sub(/^.*:/, "", fn); ir = $1; gsub(/,/, "", ir)
+                 if (fn !~ / /) print fn, ir
+             }'
+}
+
+# bench_start: notes the time and the load averages, for bench_render's header.
+bench_start() {
+    bench_started=$(date +%s)
+    bench_load_before=$(cut -d' ' -f1-3 /proc/loadavg)
+}
+
+# bench_render AWK RAW OUT [AWK_OPTIONS...]: RAW rendered by the awk program AWK
+# into OUT, through a temporary file so that OUT is never left half-written.  The
+# program sees date, cpu, lb and la (the load averages at bench_start and now),
+# min (minutes since bench_start) and AWK_OPTIONS (-v name=value ...).
+bench_render() {
+    render_awk=$1 render_raw=$2 render_out=$3
+    shift 3
+    awk -v date="$(date -u +%Y-%m-%d)" -v cpu="$(nproc)" -v lb="$bench_load_before" \
+        -v la="$(cut -d' ' -f1-3 /proc/loadavg)" \
+        -v min="$(( ($(date +%s) - bench_started + 59) / 60 ))" \
+        "$@" -f "$render_awk" "$render_raw" >"$render_out.tmp"
+    mv "$render_out.tmp" "$render_out"
+    echo "wrote $render_out" >&2
+}

@@ -48,4 +48,64 @@ expect floor-runs-both-orders 0 " dfids=" "$tmp/certify_floor" "$tmp/stacked.gra
 expect floor-runs-non-planar 0 " dfids=" "$tmp/certify_floor" "$tmp/stacked+1.graph" 2
 expect floor-refuses-bad-rounds 2 "ROUNDS must be 1 to 15" "$tmp/certify_floor" "$tmp/stacked.graph" 0
 
+# bench/certify_profile_samples.awk sorts perf samples by phase and function.
+# The samples below are written by hand in `perf script -F period,ip,sym,dso`'s
+# layout; the sums expected are added up by hand.
+tab=$(printf '\t')
+cat >"$tmp/perf.txt" <<EOF
+    500000 
+${tab}           1d0 pp_dfs (/opt/x/planewit)
+${tab}           2e0 pp_certify (/opt/x/planewit)
+${tab}           3f0 main (/opt/x/planewit)
+
+    500000 
+${tab}           1d4 search_from (inlined)
+${tab}           1d4 pp_dfs (/opt/x/planewit)
+${tab}           2e0 pp_certify (/opt/x/planewit)
+
+    250000 
+${tab}ffffffff82255aa7 clear_page_erms ([kernel.kallsyms])
+${tab}ffffffff8225fcc6 exc_page_fault ([kernel.kallsyms])
+${tab}           1cc read_edges (inlined)
+${tab}           1cc pw_graph_parse (/opt/x/planewit)
+
+    250000 
+${tab}ffffffff81000100 ksys_write ([kernel.kallsyms])
+${tab}           5a0 write_certificate (inlined)
+${tab}           5a0 cmd_certify (/opt/x/planewit)
+
+    250000 
+${tab}         29ad80 [unknown] (/usr/lib/x86_64-linux-gnu/libcrypto.so.3)
+${tab}           4c0 cli_sha256 (/opt/x/planewit)
+
+    250000 
+${tab}           104b0 _dl_start (/usr/lib/ld-linux.so.2)
+EOF
+awk -v family=fam -v run=2 -f bench/certify_profile_samples.awk "$tmp/perf.txt" | sort >"$tmp/perf.sums"
+for line in "sample fam 2 algorithm pp_dfs 1 1000000" "sample fam 2 parse page-faults 0 250000" \
+    "sample fam 2 write kernel 0 250000" "sample fam 2 hash [libcrypto.so.3] 0 250000" \
+    "sample fam 2 other _dl_start 0 250000"; do
+    has profile-samples "$tmp/perf.sums" "$line"
+done
+expect profile-samples-count 0 "5" sh -c "wc -l <'$tmp/perf.sums'"
+
+# bench/certify_profile.awk: 2 ms over 10^6 instructions is 2 ns per instruction,
+# 2000 ns per edge at M = 1000; 1 ms of 4 in the algorithm is page faults (25%).
+cat >"$tmp/profile.raw" <<EOF
+graph fam 500 1000
+sample fam 1 algorithm pp_dfs 1 2000000
+sample fam 1 algorithm page-faults 0 1000000
+sample fam 1 algorithm pp_run 1 1000000
+sample fam 1 parse pw_graph_parse 1 3000000
+count fam algorithm pp_dfs 600000
+count fam algorithm pp_dfs 400000
+count fam parse pw_graph_parse 6000000
+EOF
+awk -v runs=1 -v freq=2000 -f bench/certify_profile.awk "$tmp/profile.raw" >"$tmp/profile.md"
+has profile-report-phases "$tmp/profile.md" "| fam | 500 | 1000 | 7 | 0 (0%) | 3 (43%) | 0 (0%) | 4 (57%) |"
+has profile-report-faults "$tmp/profile.md" "| fam | 0 (-) | 0 (0%) | 0 (-) | 1 (25%) |"
+has profile-report-function "$tmp/profile.md" "| fam | algorithm | pp_dfs | 2.0 | 50% | 2000 | 1000 | 2.00 |"
+has profile-report-parse "$tmp/profile.md" "| fam | parse | pw_graph_parse | 3.0 | 100% | 3000 | 6000 | 0.50 |"
+has profile-report-no-count "$tmp/profile.md" "| fam | algorithm | page-faults | 1.0 | 25% | 1000 | - | - |"
+
 finish check_bench_tools
