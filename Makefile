@@ -102,7 +102,8 @@ bench-certify-bound: $(BIN) $(LIBKERNEL)
 	sh bench/certify_bound.sh $(BUILD)
 
 # Where certify's time goes at 10^6 edges: perf samples by phase and function, page
-# faults, callgrind's instructions per function (bench/results-certify-profile.md).
+# faults, callgrind's instructions per function; check's time by phase
+# (bench/results-certify-profile.md).  About 4 minutes; perf needs root.
 bench-certify-profile: $(BIN) $(LIBKERNEL)
 	sh bench/certify_profile.sh $(BUILD)
 

@@ -1,17 +1,19 @@
 # Renders bench/certify_profile.sh's raw lines into bench/results-certify-profile.md.
 # Input: "graph FAMILY N M"
-#        "sample FAMILY RUN PHASE WHERE OURS NS" (perf; summed over the runs here)
+#        "sample TOOL FAMILY RUN PHASE WHERE OURS NS" (perf, TOOL certify or check;
+#        summed over the runs here)
 #        "count FAMILY PHASE FUNCTION INSTRUCTIONS" (callgrind, self; summed over lines)
 # Variables: runs, freq, date, cpu, lb, la (load before, after), min.
 $1 == "graph" { fam[++nf] = $2; n[$2] = $3; m[$2] = $4 }
-$1 == "sample" {
-    f = $2; ph = $4; ms = $7 / 1e6 / runs
+$1 == "sample" && $2 == "check" { ms = $8 / 1e6 / runs; check_total[$3] += ms; check_phase[$3, $5] += ms }
+$1 == "sample" && $2 == "certify" {
+    f = $3; ph = $5; ms = $8 / 1e6 / runs
     total[f] += ms; phase[f, ph] += ms
-    if ($5 == "page-faults") faults[f, ph] += ms
-    if (ph == "algorithm") { run_alg[f, $3] += ms; if ($5 == "page-faults") run_faults[f, $3] += ms }
-    k = f SUBSEP ph SUBSEP $5
-    if (!(k in spent)) where[f, ph, ++nwhere[f, ph]] = $5
-    spent[k] += ms; ours[k] = $6
+    if ($6 == "page-faults") faults[f, ph] += ms
+    if (ph == "algorithm") { run_alg[f, $4] += ms; if ($6 == "page-faults") run_faults[f, $4] += ms }
+    k = f SUBSEP ph SUBSEP $6
+    if (!(k in spent)) where[f, ph, ++nwhere[f, ph]] = $6
+    spent[k] += ms; ours[k] = $7
 }
 $1 == "count" { instructions[$2, $3, $4] += $5 }
 # A table's head: the names, "|"-separated; the first `text` columns text, the others numbers.
@@ -20,6 +22,7 @@ function head(names, text,    col, k, i, sep) {
     for (i = 1; i <= k; i++) sep = sep (i <= text ? "---|" : "---:|")
     gsub(/\|/, " | ", names); print "| " names " |"; print sep
 }
+function ratio(a, b) { return b > 0 ? sprintf("%.2f", a / b) : "-" }
 function share(part, whole) { return whole > 0 ? sprintf("%.0f%%", 100 * part / whole) : "-" }
 # The functions of phase ph of family f, most time first, down to 2% of the phase.
 function by_function(f, ph,    i, j, k, t, order, count, fn, ir, per_instr) {
@@ -42,6 +45,7 @@ function by_function(f, ph,    i, j, k, t, order, count, fn, ir, per_instr) {
 }
 END {
     split("read parse hash algorithm text self-check write other", phases, " ")
+    split("read parse hash cert-parse verify other", check_phases, " ")
     print "# Where certify's time goes (bench/certify_profile.sh, `make bench-certify-profile`)"
     print ""
     printf "Run on %s, %s CPUs; about %s minutes. Load average (1, 5, 15 min) before: %s; after: %s.\n", date, cpu, min, lb, la
@@ -66,7 +70,7 @@ END {
     print ""
     print "## The part of each phase spent faulting in fresh memory (ms per run, share of the phase)"
     print ""
-    print "Samples whose stack holds a page fault: the kernel finding and zeroing memory the"
+    print "Samples whose stack holds a page fault: the operating system finding and zeroing memory the"
     print "process touches for the first time (2 MB pages under certify's memory policy)."
     print ""
     head("family|read|parse|hash|algorithm|text|self-check|write|other|algorithm, each run", 1)
@@ -78,11 +82,28 @@ END {
         print " |"
     }
     print ""
+    print "## check of the same certificate, by phase (ms per run)"
+    print ""
+    print "`planewit check GRAPH CERT` on the certificate certify wrote, profiled the same way. Its"
+    print "phases: read (both files), parse (the graph), hash (both files' SHA-256, which the"
+    print "verdict binds), cert-parse, verify (the rotation's faces or the subdivision's paths)."
+    print "*floor / certify*: read + parse + hash, which any check of these files must do (the"
+    print "verdict binds both files' bytes), over certify's whole process above: with certify as"
+    print "fast as it is, no check can bring check / certify below it."
+    print ""
+    head("family|check|read|parse|hash|cert-parse|verify|other|check / certify|floor / certify", 1)
+    for (i = 1; i <= nf; i++) {
+        f = fam[i]; printf "| %s | %.0f", f, check_total[f]
+        for (p = 1; p <= 6; p++) printf " | %.0f", check_phase[f, check_phases[p]]
+        floor = check_phase[f, "read"] + check_phase[f, "parse"] + check_phase[f, "hash"]
+        printf " | %s | %s |\n", ratio(check_total[f], total[f]), ratio(floor, total[f])
+    }
+    print ""
     print "## Parse and algorithm by function"
     print ""
     print "*ms*: time in the function itself (the innermost function not inlined; inlined"
     print "code counts to the function it was inlined into, in perf as in callgrind). *page-faults*"
-    print "and *kernel*: time in the kernel called from the phase. *instr/edge*: callgrind's count"
+    print "and *system*: time in the operating system called from the phase. *instr/edge*: callgrind's count"
     print "of the function's own instructions in that phase, one run, over M. *ns/instr*: the two together; a"
     print "function that computes from its caches runs well under 1 ns per instruction, one that"
     print "waits on memory at random places far above. Functions under 2% of their phase left out."

@@ -4,8 +4,11 @@
 # certify benchmark, at one size, each certified by the shipped binary:
 #  1. under perf, sampling the CPU clock with call stacks, RUNS times: the time
 #     of each phase (by the phase function on the stack: read, parse, hash,
-#     algorithm, text, self-check, write), the part of it the kernel spent
+#     algorithm, text, self-check, write), the part of it the operating system spent
 #     handing out fresh memory (page faults), and the functions it was spent in;
+#     then `planewit check` of the certificate, RUNS times, by its phases (read,
+#     parse, hash, certificate parse, verify), for the target check <= 0.25 x
+#     certify;
 #  2. under valgrind's callgrind, once for parse and once for the algorithm
 #     (collecting inside pw_graph_parse, then inside pp_certify): the
 #     instructions each of our functions executed there (a count that does not
@@ -43,16 +46,31 @@ fi
 bench_start
 bench_build certify_gen "$work" "$build"
 
+# The phase functions of each command (bench/certify_profile_samples.awk).
+certify_roots="cli_read_input=read pw_graph_parse=parse cli_sha256=hash pp_certify=algorithm \
+pp_cert_text=text pw_check_parsed=self-check write_certificate=write"
+check_roots="cli_read_input=read pw_graph_parse=parse digests=hash pw_cert_parse=cert-parse \
+pw_check_rotation=verify pw_check_subdivision=verify"
+
+# profile TOOL FAMILY ROOTS COMMAND...: RUNS perf runs of COMMAND, sorted by phase.
+profile() {
+    tool=$1 family=$2 roots=$3
+    shift 3
+    for r in $(seq "$runs"); do
+        perf record -q -e cpu-clock -F "$freq" --call-graph dwarf,16384 -o "$work/perf.data" -- \
+            "$@" >/dev/null 2>&1
+        perf script -i "$work/perf.data" -F period,ip,sym,dso 2>/dev/null |
+            awk -v tool="$tool" -v family="$family" -v run="$r" -v roots="$roots" \
+                -f bench/certify_profile_samples.awk >>"$work/raw"
+    done
+}
+
 for f in $families; do
     g=$work/$f.graph
     line=$("$work/certify_gen" "$f" "$size" "$seed" "$g")
     echo "graph $f $(field "$line" n) $(field "$line" m)" >>"$work/raw"
-    for r in $(seq "$runs"); do
-        perf record -q -e cpu-clock -F "$freq" --call-graph dwarf,16384 -o "$work/perf.data" -- \
-            "$bin" certify "$g" -o "$work/c.cert" >/dev/null 2>&1
-        perf script -i "$work/perf.data" -F period,ip,sym,dso 2>/dev/null |
-            awk -v family="$f" -v run="$r" -f bench/certify_profile_samples.awk >>"$work/raw"
-    done
+    profile certify "$f" "$certify_roots" "$bin" certify "$g" -o "$work/c.cert"
+    profile check "$f" "$check_roots" "$bin" check "$g" "$work/c.cert"
     for phase in pw_graph_parse=parse pp_certify=algorithm; do
         valgrind --tool=callgrind --toggle-collect="${phase%=*}" --callgrind-out-file="$work/cg" \
             "$bin" certify "$g" -o "$work/c.cert" >/dev/null 2>&1

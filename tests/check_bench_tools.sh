@@ -81,22 +81,29 @@ ${tab}           4c0 cli_sha256 (/opt/x/planewit)
     250000 
 ${tab}           104b0 _dl_start (/usr/lib/ld-linux.so.2)
 EOF
-awk -v family=fam -v run=2 -f bench/certify_profile_samples.awk "$tmp/perf.txt" | sort >"$tmp/perf.sums"
-for line in "sample fam 2 algorithm pp_dfs 1 1000000" "sample fam 2 parse page-faults 0 250000" \
-    "sample fam 2 write kernel 0 250000" "sample fam 2 hash [libcrypto.so.3] 0 250000" \
-    "sample fam 2 other _dl_start 0 250000"; do
+awk -v tool=certify -v family=fam -v run=2 -f bench/certify_profile_samples.awk \
+    -v roots="pw_graph_parse=parse cli_sha256=hash pp_certify=algorithm write_certificate=write" \
+    "$tmp/perf.txt" | sort >"$tmp/perf.sums"
+for line in "sample certify fam 2 algorithm pp_dfs 1 1000000" \
+    "sample certify fam 2 parse page-faults 0 250000" "sample certify fam 2 write system 0 250000" \
+    "sample certify fam 2 hash [libcrypto.so.3] 0 250000" "sample certify fam 2 other _dl_start 0 250000"; do
     has profile-samples "$tmp/perf.sums" "$line"
 done
 expect profile-samples-count 0 "5" sh -c "wc -l <'$tmp/perf.sums'"
 
 # bench/certify_profile.awk: 2 ms over 10^6 instructions is 2 ns per instruction,
 # 2000 ns per edge at M = 1000; 1 ms of 4 in the algorithm is page faults (25%).
+# check takes 7 ms as certify does (ratio 1.00), 4 of them read, parse and hash (4/7).
 cat >"$tmp/profile.raw" <<EOF
 graph fam 500 1000
-sample fam 1 algorithm pp_dfs 1 2000000
-sample fam 1 algorithm page-faults 0 1000000
-sample fam 1 algorithm pp_run 1 1000000
-sample fam 1 parse pw_graph_parse 1 3000000
+sample certify fam 1 algorithm pp_dfs 1 2000000
+sample certify fam 1 algorithm page-faults 0 1000000
+sample certify fam 1 algorithm pp_run 1 1000000
+sample certify fam 1 parse pw_graph_parse 1 3000000
+sample check fam 1 read system 0 1000000
+sample check fam 1 parse pw_graph_parse 1 2000000
+sample check fam 1 hash [libcrypto.so.3] 0 1000000
+sample check fam 1 verify pw_check_rotation 1 3000000
 count fam algorithm pp_dfs 600000
 count fam algorithm pp_dfs 400000
 count fam parse pw_graph_parse 6000000
@@ -107,5 +114,6 @@ has profile-report-faults "$tmp/profile.md" "| fam | 0 (-) | 0 (0%) | 0 (-) | 1 
 has profile-report-function "$tmp/profile.md" "| fam | algorithm | pp_dfs | 2.0 | 50% | 2000 | 1000 | 2.00 |"
 has profile-report-parse "$tmp/profile.md" "| fam | parse | pw_graph_parse | 3.0 | 100% | 3000 | 6000 | 0.50 |"
 has profile-report-no-count "$tmp/profile.md" "| fam | algorithm | page-faults | 1.0 | 25% | 1000 | - | - |"
+has profile-report-check "$tmp/profile.md" "| fam | 7 | 1 | 2 | 1 | 0 | 3 | 0 | 1.00 | 0.57 |"
 
 finish check_bench_tools
