@@ -43,7 +43,22 @@ function by_function(f, ph,    i, j, k, t, order, count, fn, ir, per_instr) {
             (ir > 0 ? sprintf("%.0f", ir / m[f]) : "-"), per_instr
     }
 }
+# A phase with no sample at all: a phase function renamed (bench/tools.sh names them),
+# or a run too short to sample.  Nothing is written then.
+function require(f, what, ms) {
+    if (ms > 0)
+        return
+    printf "certify_profile: no samples in %s on %s (a phase function renamed? see bench/tools.sh)\n", what, f > "/dev/stderr"
+    failed = 1
+}
 END {
+    for (i = 1; i <= nf; i++) {
+        require(fam[i], "certify's parse", phase[fam[i], "parse"])
+        require(fam[i], "certify's algorithm", phase[fam[i], "algorithm"])
+        require(fam[i], "check's parse", check_phase[fam[i], "parse"])
+    }
+    if (failed)
+        exit 1
     split("read parse hash algorithm text self-check write other", phases, " ")
     split("read parse hash cert-parse verify other", check_phases, " ")
     print "# Where certify's time goes (bench/certify_profile.sh, `make bench-certify-profile`)"

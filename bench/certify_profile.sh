@@ -46,19 +46,17 @@ fi
 bench_start
 bench_build certify_gen "$work" "$build"
 
-# The phase functions of each command (bench/certify_profile_samples.awk).
-certify_roots="cli_read_input=read pw_graph_parse=parse cli_sha256=hash pp_certify=algorithm \
-pp_cert_text=text pw_check_parsed=self-check write_certificate=write"
-check_roots="cli_read_input=read pw_graph_parse=parse digests=hash pw_cert_parse=cert-parse \
-pw_check_rotation=verify pw_check_subdivision=verify"
-
 # profile TOOL FAMILY ROOTS COMMAND...: RUNS perf runs of COMMAND, sorted by phase.
 profile() {
     tool=$1 family=$2 roots=$3
     shift 3
     for r in $(seq "$runs"); do
-        perf record -q -e cpu-clock -F "$freq" --call-graph dwarf,16384 -o "$work/perf.data" -- \
-            "$@" >/dev/null 2>&1
+        if ! perf record -q -e cpu-clock -F "$freq" --call-graph dwarf,16384 -o "$work/perf.data" \
+            -- "$@" >"$work/run.log" 2>&1; then
+            echo "certify_profile: failed under perf: $*" >&2
+            cat "$work/run.log" >&2
+            exit 1
+        fi
         perf script -i "$work/perf.data" -F period,ip,sym,dso 2>/dev/null |
             awk -v tool="$tool" -v family="$family" -v run="$r" -v roots="$roots" \
                 -f bench/certify_profile_samples.awk >>"$work/raw"
@@ -69,8 +67,8 @@ for f in $families; do
     g=$work/$f.graph
     line=$("$work/certify_gen" "$f" "$size" "$seed" "$g")
     echo "graph $f $(field "$line" n) $(field "$line" m)" >>"$work/raw"
-    profile certify "$f" "$certify_roots" "$bin" certify "$g" -o "$work/c.cert"
-    profile check "$f" "$check_roots" "$bin" check "$g" "$work/c.cert"
+    profile certify "$f" "$(profile_roots certify)" "$bin" certify "$g" -o "$work/c.cert"
+    profile check "$f" "$(profile_roots check)" "$bin" check "$g" "$work/c.cert"
     for phase in pw_graph_parse=parse pp_certify=algorithm; do
         valgrind --tool=callgrind --toggle-collect="${phase%=*}" --callgrind-out-file="$work/cg" \
             "$bin" certify "$g" -o "$work/c.cert" >/dev/null 2>&1

@@ -31,6 +31,18 @@ callgrind_lines() {
              }'
 }
 
+# profile_roots certify|check: the phase functions of that planewit command,
+# FUNCTION=PHASE ..., for bench/certify_profile.sh: a sample belongs to the innermost
+# one on its stack.  The suite checks that every function named here is still defined.
+profile_roots() {
+    case $1 in
+    certify) echo "cli_read_input=read pw_graph_parse=parse cli_sha256=hash pp_certify=algorithm" \
+        "pp_cert_text=text pw_check_parsed=self-check write_certificate=write" ;;
+    check) echo "cli_read_input=read pw_graph_parse=parse digests=hash pw_cert_parse=cert-parse" \
+        "pw_check_rotation=verify pw_check_subdivision=verify" ;;
+    esac
+}
+
 # bench_start: notes the time and the load averages, for bench_render's header.
 bench_start() {
     bench_started=$(date +%s)
@@ -44,10 +56,13 @@ bench_start() {
 bench_render() {
     render_awk=$1 render_raw=$2 render_out=$3
     shift 3
-    awk -v date="$(date -u +%Y-%m-%d)" -v cpu="$(nproc)" -v lb="$bench_load_before" \
+    if ! awk -v date="$(date -u +%Y-%m-%d)" -v cpu="$(nproc)" -v lb="$bench_load_before" \
         -v la="$(cut -d' ' -f1-3 /proc/loadavg)" \
         -v min="$(( ($(date +%s) - bench_started + 59) / 60 ))" \
-        "$@" -f "$render_awk" "$render_raw" >"$render_out.tmp"
+        "$@" -f "$render_awk" "$render_raw" >"$render_out.tmp"; then
+        rm -f "$render_out.tmp"
+        return 1
+    fi
     mv "$render_out.tmp" "$render_out"
     echo "wrote $render_out" >&2
 }

@@ -115,5 +115,17 @@ has profile-report-function "$tmp/profile.md" "| fam | algorithm | pp_dfs | 2.0 
 has profile-report-parse "$tmp/profile.md" "| fam | parse | pw_graph_parse | 3.0 | 100% | 3000 | 6000 | 0.50 |"
 has profile-report-no-count "$tmp/profile.md" "| fam | algorithm | page-faults | 1.0 | 25% | 1000 | - | - |"
 has profile-report-check "$tmp/profile.md" "| fam | 7 | 1 | 2 | 1 | 0 | 3 | 0 | 1.00 | 0.57 |"
+# A phase with no samples (a phase function renamed) is an error, not an empty row.
+grep -v "algorithm" "$tmp/profile.raw" >"$tmp/profile-short.raw"
+expect profile-report-refuses-empty-phase 1 "no samples in certify's algorithm on fam" \
+    awk -v runs=1 -f bench/certify_profile.awk "$tmp/profile-short.raw"
+
+# Every phase function the profile names is still defined in the sources.
+for pair in $(profile_roots certify) $(profile_roots check); do
+    fn=${pair%=*}
+    if grep -qE "^[A-Za-z].*[ *]$fn\(" checker/*.c cli/*.c producer/*.c; then ok; else
+        bad "profile-root-defined: $fn (bench/tools.sh) is defined nowhere in checker/, cli/, producer/"
+    fi
+done
 
 finish check_bench_tools
