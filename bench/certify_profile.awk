@@ -103,8 +103,8 @@ END {
     print "phases: read (both files), parse (the graph), hash (both files' SHA-256, which the"
     print "verdict binds), cert-parse, verify (the rotation's faces or the subdivision's paths)."
     print "*floor / certify*: read + parse + hash, which any check of these files must do (the"
-    print "verdict binds both files' bytes), over certify's whole process above: with certify as"
-    print "fast as it is, no check can bring check / certify below it."
+    print "verdict binds both files' bytes), over certify's whole process above: check / certify"
+    print "cannot go below it unless reading, parsing or hashing get faster."
     print ""
     head("family|check|read|parse|hash|cert-parse|verify|other|check / certify|floor / certify", 1)
     for (i = 1; i <= nf; i++) {
