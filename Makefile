@@ -208,9 +208,11 @@ build-fault/alloc_failure_vg: $(HARD_DEPS)
 GCOVR := gcovr --root . --filter 'checker/' build-cov/checker build-cov/fault
 COV_FAULT_OBJ := $(KERNEL_SRC:checker/%.c=build-cov/fault/%.o) build-cov/fault/t_alloc_failure.o \
                  build-cov/fault/t_vector_list.o
-# Branch counts have once come out one short with the kernel unchanged (lex.c:41,
-# which test_lex covers alone); the counters' own complaints (merge mismatches,
-# unwritable or corrupt files) go to COV_ERRORS and are shown.
+# A process that ends while another of its threads still runs the kernel dumps
+# counters mid-job: derived branch counts came out negative (gcovr stops) or one
+# short.  batch, interrupted, therefore ends with _exit (cli/cmd_batch.c).  The
+# counters' own complaints (merge mismatches, unwritable or corrupt files) go to
+# COV_ERRORS and are shown.
 COV_ERRORS := $(CURDIR)/build-cov/gcov-errors.txt
 coverage:
 	rm -rf build-cov

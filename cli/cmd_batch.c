@@ -134,10 +134,12 @@ static int run(const batch_args *a, const job_list *list, cli_output *out)
     int rc = batch_run(&config, out->file, &summary, &progress);
     progress_finish(&progress);
     if (rc == -2) {
-        /* Workers may still be inside a long job, using the list: exit here, freeing nothing. */
+        /* Workers may still be inside a long job, using the list: end here, freeing
+           nothing.  _exit, not exit: exit handlers must not run under a running job
+           (a coverage build's counter dump did, and recorded negative counts). */
         cli_output_abort(out);
         fprintf(stderr, "planewit batch: interrupted; %s was not written\n", a->output);
-        exit(128 + (int)cli_interrupted);
+        _exit(128 + (int)cli_interrupted);
     }
     if (rc != 0 || cli_output_commit(out) != 0) {
         if (rc != 0)
